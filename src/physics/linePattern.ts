@@ -1,0 +1,180 @@
+/**
+ * J-resolved Zeeman patterns of a line in the weak-field (linear) regime.
+ *
+ * Reference: E. U. Condon and G. H. Shortley, "The Theory of Atomic Spectra"
+ * (1935), ch. XVI; strengths as squared 3j symbols as in Edmonds (1957) §5.4;
+ * effective Landé factor from J. C. del Toro Iniesta, "Introduction to
+ * Spectropolarimetry" (2003), eq. 3.44 (Shenstone–Blair / Landi Degl'Innocenti).
+ */
+import { Dec } from "./decimal.js";
+import { Rational } from "./rational.js";
+import { mValues } from "./quantum.js";
+import { threeJ } from "./wigner.js";
+
+export type Polarization = "sigma+" | "pi" | "sigma-" | null;
+export type Multipole = "E1" | "M1" | "E2";
+
+/** Rank k of a multipole: 1 for E1 and M1, 2 for E2. */
+export function multipoleRank(m: Multipole): number {
+  return m === "E2" ? 2 : 1;
+}
+
+export interface PatternComponent {
+  /** Doubled upper m. */
+  mu2: number;
+  /** Doubled lower m. */
+  ml2: number;
+  /** Δm = mu − ml (an ordinary integer). */
+  deltaM: number;
+  polarization: Polarization;
+  /** Squared 3j symbol (Ju k Jl; −mu, Δm, ml); all strengths of a line sum to 1. Exact. */
+  strength: Rational;
+  /** gu·mu − gl·ml with the g values in use (measured where given). */
+  shiftLorentz: Dec;
+  /** The same with the exact LS values (gL = 1, gS = 2). */
+  shiftLorentzExact: Rational;
+  /** shiftLorentz·μB/h, in Hz/T. */
+  shiftHzPerT: Dec;
+}
+
+export interface PatternLevel {
+  /** Doubled J. */
+  J2: number;
+  /** g in use (measured or LS), null for J = 0. */
+  g: Dec | null;
+  /** Exact LS g (gL = 1, gS = 2), null for J = 0. */
+  gExact: Rational | null;
+}
+
+function polarizationOf(deltaM: number): Polarization {
+  if (deltaM === 1) return "sigma+";
+  if (deltaM === 0) return "pi";
+  if (deltaM === -1) return "sigma-";
+  return null;
+}
+
+/**
+ * Every Zeeman component (mu, ml) of a line between an upper and a lower
+ * level, for a multipole of rank k.
+ *
+ * Formula: strength = (Ju k Jl; −mu, Δm, ml)² with Δm = mu − ml; shift in
+ * Lorentz units gu·mu − gl·ml; in Hz/T times μB/h.
+ * Selection rules: |Δm| ≤ k and a non-zero 3j symbol (which also enforces the
+ * triangle rule on Ju, k, Jl); components of zero strength are left out.
+ * Exact: strengths and exact-LS shifts yes; shifts with measured g, no.
+ * Ordered by shift (exact LS), then by Δm.
+ *
+ * Worked example (Na D2, 2P3/2 → 2S1/2, E1): six components; σ+ (3/2, 1/2)
+ * strength 1/4, σ+ (1/2, −1/2) 1/12, π (±1/2, ±1/2) 1/6 each, σ− mirrored:
+ * the textbook 3:1:2:2:1:3.
+ */
+export function lineComponents(upper: PatternLevel, lower: PatternLevel, k: number, muB_h: Dec): PatternComponent[] {
+  const out: PatternComponent[] = [];
+  const gu = upper.g ?? new Dec(0);
+  const gl = lower.g ?? new Dec(0);
+  const gue = upper.gExact ?? Rational.ZERO;
+  const gle = lower.gExact ?? Rational.ZERO;
+  for (const mu2 of mValues(upper.J2)) {
+    for (const ml2 of mValues(lower.J2)) {
+      const dm2 = mu2 - ml2;
+      if (Math.abs(dm2) > 2 * k) continue;
+      const s = threeJ(upper.J2, 2 * k, lower.J2, -mu2, dm2, ml2);
+      if (s.sign === 0) continue;
+      const mu = Rational.half(mu2);
+      const ml = Rational.half(ml2);
+      const shiftLorentz = gu.mul(mu.toDecimal()).sub(gl.mul(ml.toDecimal()));
+      out.push({
+        mu2,
+        ml2,
+        deltaM: dm2 / 2,
+        polarization: polarizationOf(dm2 / 2),
+        strength: s.squared,
+        shiftLorentz,
+        shiftLorentzExact: gue.mul(mu).sub(gle.mul(ml)),
+        shiftHzPerT: shiftLorentz.mul(muB_h),
+      });
+    }
+  }
+  out.sort((a, b) => a.shiftLorentzExact.cmp(b.shiftLorentzExact) || a.deltaM - b.deltaM || a.mu2 - b.mu2);
+  return out;
+}
+
+/**
+ * Effective Landé factor of a line (the first moment of its σ components):
+ * g_eff = (gu + gl)/2 + (gu − gl)[Ju(Ju+1) − Jl(Jl+1)]/4; a J = 0 level
+ * contributes g = 0. Exact: no when g values are measured.
+ * Reference: del Toro Iniesta (2003), eq. 3.44.
+ *
+ * Worked example: Fe I 525.02 nm (upper z 7D°1, g = 3; lower a 5D0) gives 3;
+ * Fe I 630.25 nm (lower z 5P°1, g = 5/2; upper e 5D0) gives 5/2: the two
+ * solar magnetograph lines (Solanki, Space Sci. Rev. 63, 1 (1993)).
+ */
+export function effectiveLande(upper: { J2: number; g: Dec | null }, lower: { J2: number; g: Dec | null }): Dec {
+  const gu = upper.g ?? new Dec(0);
+  const gl = lower.g ?? new Dec(0);
+  const ju = Rational.of(upper.J2 * (upper.J2 + 2), 4).toDecimal();
+  const jl = Rational.of(lower.J2 * (lower.J2 + 2), 4).toDecimal();
+  return gu.add(gl).div(2).add(gu.sub(gl).mul(ju.sub(jl)).div(4));
+}
+
+function lcm(a: bigint, b: bigint): bigint {
+  let x = a;
+  let y = b;
+  while (y !== 0n) [x, y] = [y, x % y];
+  return (a / x) * b;
+}
+
+/**
+ * The classical notation of a Zeeman pattern, "(π shifts) σ shifts / d": the
+ * distinct non-negative Lorentz-unit shifts of the π components in
+ * parentheses, then those of the σ components, all as numerators over their
+ * least common denominator d. Several π shifts share one pair of parentheses.
+ * Uses the exact LS shifts. Components with |Δm| = 2 (E2 only) are not part
+ * of the notation, which is defined for dipole lines: E2 lines get null.
+ * Exact: yes.
+ *
+ * Worked examples (Condon and Shortley, ch. XVI; White, "Introduction to
+ * Atomic Spectra" (1934), ch. X): Na D1 "(2) 4 / 3"; Na D2 "(1) 3, 5 / 3";
+ * a normal triplet "(0) 1 / 1"; Hg 546.1 nm (3S1 → 3P2) "(0, 1) 2, 3, 4 / 2".
+ */
+export function patternNotation(components: PatternComponent[], k: number): string | null {
+  if (k !== 1) return null;
+  const distinct = (pol: (c: PatternComponent) => boolean): Rational[] => {
+    const seen = new Map<string, Rational>();
+    for (const c of components) {
+      if (!pol(c)) continue;
+      const a = c.shiftLorentzExact.abs();
+      seen.set(a.toString(), a);
+    }
+    return [...seen.values()].sort((a, b) => a.cmp(b));
+  };
+  const pi = distinct((c) => c.deltaM === 0);
+  const sigma = distinct((c) => Math.abs(c.deltaM) === 1);
+  let d = 1n;
+  for (const r of [...pi, ...sigma]) d = lcm(d, r.den);
+  const nums = (rs: Rational[]) => rs.map((r) => ((r.num * d) / r.den).toString()).join(", ");
+  return `(${nums(pi)}) ${nums(sigma)} / ${d}`;
+}
+
+/**
+ * One-line reading of a pattern: "no splitting", "normal triplet" (π at 0,
+ * σ at ±1 Lorentz unit), "triplet, σ at ±g" (π at 0, one σ shift g ≠ 1), or
+ * "anomalous: n π and m σ components" (counting components of non-zero
+ * strength; for E2 lines also the |Δm| = 2 components). Uses exact LS shifts.
+ */
+export function patternSummary(components: PatternComponent[]): string {
+  if (components.every((c) => c.shiftLorentzExact.isZero())) return "no splitting";
+  const piShifts = new Set(components.filter((c) => c.deltaM === 0).map((c) => c.shiftLorentzExact.abs().toString()));
+  const sigmaShifts = new Set(
+    components.filter((c) => Math.abs(c.deltaM) === 1).map((c) => c.shiftLorentzExact.abs().toString()),
+  );
+  const quad = components.filter((c) => Math.abs(c.deltaM) === 2).length;
+  if (quad === 0 && piShifts.size === 1 && piShifts.has("0") && sigmaShifts.size === 1) {
+    const s = [...sigmaShifts][0]!;
+    return s === "1" ? "normal triplet" : `triplet, σ at ±${s} Lorentz units`;
+  }
+  const nPi = components.filter((c) => c.deltaM === 0).length;
+  const nSigma = components.filter((c) => Math.abs(c.deltaM) === 1).length;
+  const extra = quad > 0 ? ` and ${quad} with |Δm| = 2` : "";
+  return `anomalous: ${nPi} π and ${nSigma} σ components${extra}`;
+}
