@@ -1,17 +1,23 @@
 /** Suggestions for mistyped keys and ids. */
 
-/** Levenshtein distance (insert, delete, substitute; each costs 1). */
+/**
+ * Edit distance counting insertions, deletions, substitutions and swaps of
+ * two neighbouring characters as 1 each (optimal string alignment), since a
+ * swap ("lable" for "label") is the commonest typing slip.
+ */
 export function editDistance(a: string, b: string): number {
-  let prev = Array.from({ length: b.length + 1 }, (_, j) => j);
+  const d: number[][] = Array.from({ length: a.length + 1 }, (_, i) => Array.from({ length: b.length + 1 }, (_, j) => (i === 0 ? j : j === 0 ? i : 0)));
+  const at = (i: number, j: number): number => d[i]?.[j] ?? 0;
   for (let i = 1; i <= a.length; i++) {
-    const cur = [i];
+    const row = d[i] ?? [];
     for (let j = 1; j <= b.length; j++) {
-      const sub = (prev[j - 1] ?? 0) + (a[i - 1] === b[j - 1] ? 0 : 1);
-      cur.push(Math.min(sub, (prev[j] ?? 0) + 1, (cur[j - 1] ?? 0) + 1));
+      const cost = a[i - 1] === b[j - 1] ? 0 : 1;
+      let v = Math.min(at(i - 1, j) + 1, at(i, j - 1) + 1, at(i - 1, j - 1) + cost);
+      if (i > 1 && j > 1 && a[i - 1] === b[j - 2] && a[i - 2] === b[j - 1]) v = Math.min(v, at(i - 2, j - 2) + 1);
+      row[j] = v;
     }
-    prev = cur;
   }
-  return prev[b.length] ?? 0;
+  return at(a.length, b.length);
 }
 
 /**

@@ -44,7 +44,7 @@ function parsePlainOrConcise(text: string): Parsed<Measured> {
     return bad(`"${text}" is not a number`, specialHint(text) ?? EXAMPLES);
   }
   const tooBig = checkSize(int + (frac ?? "") + (unc ?? ""), exp);
-  if (tooBig) return bad(tooBig, "shorten it or use an exponent, e.g. 1.2345e-7");
+  if (tooBig) return bad(tooBig, "no measured value needs that; check the number for a typing accident");
   const value = dec(`${sign}${int === "" ? "0" : int}${frac !== undefined ? "." + (frac === "" ? "0" : frac) : ""}${exp !== undefined ? "e" + exp : ""}`);
   let uncertainty: Dec | null = null;
   if (unc !== undefined) {
@@ -107,7 +107,7 @@ function lookUp(unit: string, table: UnitTable): string | null {
 export function parseQuantity(text: string, kind: UnitKind | UnitTable, what: string): Parsed<Quantity> {
   const table = typeof kind === "string" ? kindTable(kind) : kind;
   const kindName = typeof kind === "string" ? kind : "moment";
-  const right = `units for ${what} (a ${kindName}) are ${Object.keys(table).join(", ")}`;
+  const right = `${kindName} units are ${Object.keys(table).join(", ")}`;
   const t = text.trim();
   const m = /^(.*\S)\s+(\S+)$/.exec(t);
   if (!m) {
@@ -115,15 +115,15 @@ export function parseQuantity(text: string, kind: UnitKind | UnitTable, what: st
     if (glued && glued[2] !== undefined && lookUp(glued[2], table))
       return bad(`"${t}" needs a space between number and unit`, `write "${glued[1]} ${glued[2]}"`);
     const number = parseMeasured(t);
-    if (number.ok) return bad(`${what} "${t}" has no unit`, `write it as "<number> <unit>"; ${right}`);
-    return bad(`${what} "${t}" is not "<number> <unit>"`, `e.g. "${example(table)}"; ${right}`);
+    if (number.ok) return bad(`"${t}" has no unit`, `write ${what} as "<number> <unit>"; ${right}`);
+    return bad(`"${t}" is not "<number> <unit>"`, `e.g. "${example(table)}"; ${right}`);
   }
   const [, numText = "", unitText = ""] = m;
   const unit = lookUp(unitText, table);
   if (!unit) {
     const other = UNITS[unitText];
-    const wrong = other ? `"${unitText}" is a ${other.kind} unit, not a ${kindName} unit` : `unknown unit "${unitText}"`;
-    return bad(`${wrong} in ${what} "${t}"`, right);
+    const wrong = other ? `"${unitText}" is a ${other.kind} unit, not a ${kindName} unit` : `unknown unit "${unitText}" in "${t}"`;
+    return bad(wrong, `${what} needs a ${kindName} unit; ${right}`);
   }
   const n = parseMeasured(numText);
   if (!n.ok) return n;

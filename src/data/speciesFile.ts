@@ -58,7 +58,7 @@ class SpeciesReader {
   }
 
   positive(q: Quantity | null, t: TextAt | null, what: string, hint: string): Quantity | null {
-    if (q && t && !q.value.isPositive()) {
+    if (q && t && (q.value.isZero() || q.value.isNegative())) {
       this.add(t.at, `${what} ${t.text} is not positive`, hint);
       return null;
     }
@@ -118,7 +118,7 @@ class SpeciesReader {
       try {
         I2 = parseDoubled(spinText.text);
       } catch {
-        const half = /^\d+\.5$/.test(spinText.text) ? `; write ${Number(spinText.text.split(".")[0]) * 2 + 1}/2` : "";
+        const half = /^\d+\.5$/.test(spinText.text) ? ` (here ${Number(spinText.text.split(".")[0]) * 2 + 1}/2)` : "";
         this.add(spinText.at, `nuclear spin "${spinText.text}" is not an integer or half-integer`, `write it as 0, 1, 2, ... or 1/2, 3/2, ...${half}`);
       }
       if (I2 !== null && I2 < 0) {

@@ -21,7 +21,7 @@ export function parseTermSymbol(text: string): Parsed<TermSymbol> {
   const m = SHAPE.exec(t);
   if (!m) {
     if (/_\{?[^}]*\}?$/.test(t) || /[[\]{}]/.test(t))
-      return bad(`term "${t}" uses markup`, `write J directly after the letter: ${FORMAT_HINT}`);
+      return bad(`term "${t}" uses markup`, `put J directly after the letter; ${FORMAT_HINT}`);
     if (/^[A-Za-z]/.test(t)) return bad(`term "${t}" does not start with the multiplicity 2S+1`, FORMAT_HINT);
     return bad(`term "${t}" is not a term symbol`, FORMAT_HINT);
   }

@@ -28,7 +28,10 @@ export class YamlSource {
 
   place(node: Node | null | undefined): Place {
     const offset = node?.range?.[0];
-    if (offset === undefined) return START;
+    return offset === undefined ? START : this.placeOfOffset(offset);
+  }
+
+  placeOfOffset(offset: number): Place {
     const p = this.lc.linePos(offset);
     return { line: p.line, column: p.col };
   }
@@ -106,7 +109,7 @@ export function parseYaml(text: string, sink: ProblemSink): YamlSource | null {
     }
   }
   if (sink.count > before) return null;
-  checkTree(src, src.root, 0);
+  checkTree(src, src.root, 0, text);
   return sink.count > before ? null : src;
 }
 
@@ -126,27 +129,30 @@ function yamlHint(code: string): string {
   }
 }
 
-function checkTree(src: YamlSource, node: unknown, depth: number): void {
+function checkTree(src: YamlSource, node: unknown, depth: number, text: string): void {
   if (node === null || node === undefined) return;
   if (isAlias(node)) {
     src.sink.add(src.place(node), `YAML alias *${node.source} is not allowed`, "write the value out in full; anchors and aliases are refused in data files");
     return;
   }
   if (isPair(node)) {
-    checkTree(src, node.key, depth);
-    checkTree(src, node.value, depth);
+    checkTree(src, node.key, depth, text);
+    checkTree(src, node.value, depth, text);
     return;
   }
   const n = node as Node;
   if ((isScalar(n) || isMap(n) || isSeq(n)) && n.anchor) {
-    src.sink.add(src.place(n), `YAML anchor &${n.anchor} is not allowed`, "remove the anchor and write every value out in full; anchors and aliases are refused in data files");
+    // The node starts after its anchor; point at the anchor itself.
+    const start = n.range?.[0] ?? 0;
+    const amp = text.lastIndexOf(`&${n.anchor}`, start);
+    src.sink.add(amp >= 0 ? src.placeOfOffset(amp) : src.place(n), `YAML anchor &${n.anchor} is not allowed`, "remove the anchor and write every value out in full; anchors and aliases are refused in data files");
   }
   if (isMap(n) || isSeq(n)) {
     if (depth >= MAX_DEPTH) {
       src.sink.add(src.place(n), `YAML is nested more than ${MAX_DEPTH} levels deep`, "a species file needs only a few levels: species → levels → level → hyperfine");
       return;
     }
-    for (const item of n.items) checkTree(src, item, depth + 1);
+    for (const item of n.items) checkTree(src, item, depth + 1, text);
   }
 }
 
