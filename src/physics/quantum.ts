@@ -26,7 +26,7 @@ export function formatDoubled(k: number): string {
 /** The doubled m values -j, -j+1, ..., j of a doubled j, ascending. */
 export function mValues(j2: number): number[] {
   const out: number[] = [];
-  for (let m = -j2; m <= j2; m += 2) out.push(m);
+  for (let m = 0 - j2; m <= j2; m += 2) out.push(m === 0 ? 0 : m); // never -0
   return out;
 }
 

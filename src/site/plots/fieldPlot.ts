@@ -108,7 +108,7 @@ export function fieldPlotSvg(input: FieldPlotInput, axis: FieldAxis): string {
       ? (b: number) => x0 + ((Math.log10(b) - Math.log10(bLo)) / (Math.log10(bMax) - Math.log10(bLo) || 1)) * (x1 - x0)
       : (b: number) => x0 + ((b - bLo) / (bMax - bLo || 1)) * (x1 - x0);
   const pad = (eMax - eMin) * 0.05 || Math.abs(eMax) * 0.05 || 1;
-  const yTicks = linearTicks((eMin - pad) / eu.factor, (eMax + pad) / eu.factor);
+  const yTicks = linearTicks((eMin - pad) / eu.factor, (eMax + pad) / eu.factor, 7);
   const yLo = Math.min(eMin - pad, yTicks[0]! * eu.factor);
   const yHi = Math.max(eMax + pad, yTicks[yTicks.length - 1]! * eu.factor);
   const Y = (e: number) => y0 - ((e - yLo) / (yHi - yLo)) * (y0 - y1);

@@ -71,7 +71,7 @@ export function stickPlotSvg(input: StickPlotInput): string {
   if (!(hMax > 0)) throw new RangeError("all strengths are zero");
   const reach = Math.max(...shifts.map(Math.abs)) || 1;
   const fu = frequencyUnit(reach);
-  const ticks = linearTicks(-reach * 1.1 / fu.factor, reach * 1.1 / fu.factor);
+  const ticks = linearTicks((-reach * 1.1) / fu.factor, (reach * 1.1) / fu.factor, 8);
   const lo = Math.min(-reach * 1.1, ticks[0]! * fu.factor);
   const hi = Math.max(reach * 1.1, ticks[ticks.length - 1]! * fu.factor);
   const x0 = LEFT;
@@ -93,7 +93,7 @@ export function stickPlotSvg(input: StickPlotInput): string {
     const lam = toNumber(input.wavelength);
     const c = toNumber(input.speedOfLight);
     const toPm = (f: number) => (-lam * lam * f) / c / 1e-12;
-    const pmTicks = linearTicks(Math.min(toPm(lo), toPm(hi)), Math.max(toPm(lo), toPm(hi)));
+    const pmTicks = linearTicks(Math.min(toPm(lo), toPm(hi)), Math.max(toPm(lo), toPm(hi)), 8);
     for (const t of pmTicks) {
       const f = (-t * 1e-12 * c) / (lam * lam);
       if (f < lo || f > hi) continue;

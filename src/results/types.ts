@@ -1,0 +1,69 @@
+/**
+ * Computed results of one species: what the site pages and the JSON export
+ * are made from. Plain data; no formatting decisions here.
+ */
+import type { Dec } from "../physics/decimal.js";
+import type { Rational } from "../physics/rational.js";
+import type { PatternComponent } from "../physics/linePattern.js";
+import type { LevelInput, LineInput, SpeciesInput } from "../data/model.js";
+
+export interface SublevelShift {
+  /** Doubled m (mJ or mF). */
+  m2: number;
+  /** Linear shift, Hz/T. */
+  shiftHzPerT: Dec;
+}
+
+export interface HyperfineLevelResult {
+  /** Doubled F. */
+  F2: number;
+  /** gF, null for F = 0. */
+  gF: Dec | null;
+  /** Zero-field energy relative to the level centre, Hz. */
+  zeroFieldHz: Dec;
+  sublevels: SublevelShift[];
+}
+
+export interface LevelResult {
+  input: LevelInput;
+  /** Doubled J. */
+  J2: number;
+  /** g in use: measured if given, else LS with gL = 1 − m_e/M and gS = −g_e; null for J = 0. */
+  gJ: Dec | null;
+  gJFrom: "measured" | "LS" | "none";
+  /** LS value with the physical gL, gS (shown beside a measured one). */
+  gJLS: Dec | null;
+  /** LS value with gL = 1, gS = 2, exact. */
+  gJExact: Rational | null;
+  sublevels: SublevelShift[];
+  /** Empty without nuclear spin. */
+  hyperfine: HyperfineLevelResult[];
+}
+
+export interface LineResult {
+  input: LineInput;
+  upper: LevelResult;
+  lower: LevelResult;
+  /** Multipole rank. */
+  k: number;
+  gEff: Dec;
+  /** Classical notation from exact LS g values; null for E2. */
+  pattern: string | null;
+  summary: string;
+  components: PatternComponent[];
+  /** Line frequency c/λ (Hz) when a wavelength is given. */
+  frequencyHz: Dec | null;
+}
+
+export interface SpeciesResult {
+  input: SpeciesInput;
+  gL: Dec;
+  gS: Dec;
+  /** gI in use (atomic sign convention), null without nucleus. */
+  gI: Dec | null;
+  gIFrom: "gI" | "moment" | null;
+  /** Doubled nuclear spin, 0 without nucleus. */
+  I2: number;
+  levels: LevelResult[];
+  lines: LineResult[];
+}

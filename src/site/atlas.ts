@@ -1,0 +1,120 @@
+/**
+ * Everything the templates need, computed once per build: the site model.
+ * Templates only lay out what is here; they do no arithmetic.
+ */
+import type { DataFolder } from "../data/model.js";
+import type { ConstantsEdition } from "../physics/constants/constant.js";
+import { listConstants } from "../physics/constants/constant.js";
+import { computeSpecies } from "../results/computeSpecies.js";
+import type { SpeciesResult } from "../results/types.js";
+import { tableCsv } from "./csv.js";
+import { speciesExport } from "./exportJson.js";
+import { speciesPage, type SpeciesPage } from "./speciesPage.js";
+import { textCell, type Table } from "./table.js";
+
+export interface BuildInfo {
+  /** ISO date-time of the build (from SOURCE_DATE_EPOCH when set). */
+  date: string;
+  constantsEdition: string;
+  dataVersion: string;
+}
+
+export interface SpeciesEntry {
+  id: string;
+  label: string;
+  /** Page URL relative to the site root. */
+  url: string;
+  exportUrl: string;
+  result: SpeciesResult;
+  page: SpeciesPage;
+  /** Pretty-printed JSON export. */
+  exportJson: string;
+  summary: { levels: number; lines: number; nuclearSpin: string | null };
+}
+
+export interface Atlas {
+  title: string;
+  lab: string | null;
+  siteUrl: string | null;
+  /** Path prefix when hosted under a sub-path ("/" by default). */
+  pathPrefix: string;
+  build: BuildInfo;
+  constants: ConstantsEdition;
+  constantsTable: Table;
+  fields: { text: string; tesla: string }[];
+  species: SpeciesEntry[];
+  /** Every CSV file of the site: path relative to the root, and content. */
+  csvFiles: { path: string; content: string }[];
+}
+
+export function buildAtlas(folder: DataFolder, constants: ConstantsEdition, buildDate: string): Atlas {
+  const build: BuildInfo = { date: buildDate, constantsEdition: constants.edition, dataVersion: folder.dataVersion };
+  const species = [...folder.species]
+    .sort((a, b) => a.id.localeCompare(b.id, "en"))
+    .map((input): SpeciesEntry => {
+      const result = computeSpecies(input, constants);
+      const url = `species/${input.id}/`;
+      const page = speciesPage(result, `species/${input.id}/csv`);
+      const exportJson = JSON.stringify(speciesExport(result, build), null, 2) + "\n";
+      return {
+        id: input.id,
+        label: input.label,
+        url,
+        exportUrl: `export/${input.id}.json`,
+        result,
+        page,
+        exportJson,
+        summary: {
+          levels: input.levels.length,
+          lines: input.lines.length,
+          nuclearSpin: input.nucleus ? input.nucleus.I2 % 2 === 0 ? String(input.nucleus.I2 / 2) : `${input.nucleus.I2}/2` : null,
+        },
+      };
+    });
+  const constantsTable: Table = {
+    id: "constants",
+    caption: `${constants.edition} values used by this build`,
+    csvPath: "constants/constants.csv",
+    columns: [
+      { key: "symbol", label: "symbol", kind: "text" },
+      { key: "name", label: "quantity", kind: "text" },
+      { key: "value", label: "value", kind: "text" },
+      { key: "u", label: "standard uncertainty", kind: "text" },
+      { key: "unit", label: "unit", kind: "text" },
+      { key: "reference", label: "reference", kind: "text" },
+    ],
+    rows: listConstants(constants).map((c) => ({
+      anchor: `const:${c.key}`,
+      cells: [
+        textCell(c.symbol),
+        textCell(c.name),
+        textCell(c.value),
+        textCell(c.exact ? "exact" : c.uncertainty),
+        textCell(c.unit),
+        textCell(c.reference),
+      ],
+    })),
+  };
+  const tables: Table[] = [constantsTable];
+  for (const s of species) {
+    tables.push(s.page.levels, s.page.lines);
+    for (const sec of s.page.levelSections) {
+      tables.push(sec.sublevels);
+      if (sec.hyperfine) tables.push(sec.hyperfine);
+      if (sec.hyperfineSublevels) tables.push(sec.hyperfineSublevels);
+    }
+    for (const sec of s.page.lineSections) tables.push(sec.components);
+  }
+  return {
+    title: folder.site.title,
+    lab: folder.site.lab,
+    siteUrl: folder.site.siteUrl,
+    pathPrefix: folder.site.pathPrefix,
+    build,
+    constants,
+    constantsTable,
+    fields: folder.site.fields.map((f) => ({ text: f.text, tesla: f.tesla.toString() })),
+    species,
+    csvFiles: tables.map((t) => ({ path: t.csvPath, content: tableCsv(t) })),
+  };
+}

@@ -1,0 +1,31 @@
+/**
+ * The Eleventy plugin of Sublevel Atlas: every filter, transform and
+ * passthrough copy the templates rely on, registered in one place.
+ */
+import { relativeUrl } from "./relativeUrl.js";
+
+// Eleventy's UserConfig has no published types; the few methods used here are typed locally.
+interface EleventyConfigLike {
+  addFilter(name: string, fn: (...args: never[]) => unknown): void;
+  addPassthroughCopy(map: Record<string, string>): void;
+  htmlTransformer: {
+    addUrlTransform(extensions: string, fn: (this: { url?: string }, url: string) => string, options?: object): void;
+  };
+}
+
+export function atlasPlugin(eleventyConfig: EleventyConfigLike): void {
+  // Static assets and the published input schemas.
+  eleventyConfig.addPassthroughCopy({ "templates/assets": "assets", schema: "schema" });
+
+  // Every site-root link becomes relative to its page (works from file:// and under any prefix).
+  eleventyConfig.htmlTransformer.addUrlTransform(
+    "html",
+    function (url: string) {
+      return relativeUrl(url, this.url ?? "/");
+    },
+    { priority: -1 },
+  );
+
+  // A value as JSON for an inline data attribute or script.
+  eleventyConfig.addFilter("toJson", (value: never) => JSON.stringify(value));
+}
