@@ -1,0 +1,133 @@
+/**
+ * How far the linear (weak-field) Zeeman description of a hyperfine level
+ * can be trusted, and the field scale of the hyperfine Paschen–Back regime.
+ *
+ * Linear shift of |F mF⟩: (μB/h)·gF·mF·B (hyperfine.ts gF, 0 for F = 0).
+ * Exact shift: E(B) − E(0) from hyperfineZeeman.ts. The validity field of a
+ * criterion is the lowest field at which some sublevel first breaks it:
+ *  - relative: |linear − exact| ≤ tolerance·|exact| (default 1 %). Sublevels
+ *    whose linear shift is zero (mF = 0 or gF = 0) are left out: their whole
+ *    shift is non-linear, so a relative test of a linear shift means nothing
+ *    for them; the absolute criterion covers them.
+ *  - absolute: |linear − exact| ≤ tolerance (default 1 kHz), every sublevel.
+ * Method: sample the fields 1, 1.5, 2, 3, 5, 7 × 10^k T from 1e-9 T up to
+ * maxTesla (default 10 T), take the first sample that breaks the criterion,
+ * and bisect between it and the sample before (or 0) to 1e-9 relative.
+ * A violation that starts and ends between two samples would be missed;
+ * the deviations grow smoothly (∝ B² at first), so this is not expected.
+ * Exact: the energies are (hyperfineZeeman.ts); the field is found to ~9 digits.
+ * `null` means "beyond range": never broken up to maxTesla.
+ *
+ * Paschen–Back field: B_PB = ΔE_max / ((μB/h)·|gJ|), with ΔE_max the largest
+ * zero-field splitting between F levels adjacent in energy. For J = 1/2 this
+ * is A(I + 1/2)/((μB/h)·gJ), the field at which the electron's Zeeman energy
+ * per unit mJ equals the hyperfine splitting. null without at least two F
+ * levels or with gJ = 0.
+ * Reference: A. Corney, "Atomic and Laser Spectroscopy" (Oxford, 1977), ch. 16.
+ *
+ * Worked example: 87Rb 5²S1/2 (A = 3417.341305452145 MHz, gJ = 2.00233113,
+ * μB/h = 13996244917.1 Hz/T): B_PB = 6834.68261090429 MHz / (13996244917.1 Hz/T
+ * × 2.00233113) = 0.2438770… T.
+ */
+import { Dec, ZERO } from "../decimal.js";
+import { fValues, gF, hyperfineShift } from "../hyperfine.js";
+import { hyperfineZeemanSolver, type HyperfineZeemanLevel } from "./hyperfineZeeman.js";
+
+export interface ValidityOptions {
+  /** Relative tolerance, default 0.01. */
+  relative?: Dec;
+  /** Absolute tolerance in Hz, default 1000. */
+  absoluteHz?: Dec;
+  /** Upper end of the search in tesla, default 10. */
+  maxTesla?: Dec;
+}
+
+export interface ValidityLimit {
+  /** Field (T) where the criterion is first broken; null = beyond range. */
+  tesla: Dec | null;
+  /** The sublevel that breaks it first. */
+  sublevel: { F2: number; mF2: number } | null;
+}
+
+export interface LinearValidity {
+  relative: ValidityLimit;
+  absolute: ValidityLimit;
+  maxTesla: Dec;
+  /** Paschen–Back field scale B_PB in tesla, or null. */
+  paschenBackTesla: Dec | null;
+}
+
+/** B_PB = ΔE_max/((μB/h)|gJ|) (see the module comment). */
+export function paschenBackField(level: HyperfineZeemanLevel): Dec | null {
+  const B = level.I2 >= 2 && level.J2 >= 2 ? level.B : ZERO;
+  const e = fValues(level.I2, level.J2).map((F2) => hyperfineShift(level.A, B, level.I2, level.J2, F2));
+  if (e.length < 2 || level.gJ.isZero()) return null;
+  e.sort((x, y) => x.cmp(y));
+  let max = ZERO;
+  for (let k = 1; k < e.length; k++) if (e[k]!.minus(e[k - 1]!).gt(max)) max = e[k]!.minus(e[k - 1]!);
+  return max.div(level.muB_h.mul(level.gJ.abs()));
+}
+
+const STEPS = ["1", "1.5", "2", "3", "5", "7"];
+
+/** Field samples 1e-9 T … max (inclusive), ascending. */
+export function validitySamples(max: Dec): Dec[] {
+  const out: Dec[] = [];
+  for (let k = -9; ; k++) {
+    for (const s of STEPS) {
+      const b = new Dec(`${s}e${k}`);
+      if (b.gte(max)) {
+        out.push(max);
+        return out;
+      }
+      out.push(b);
+    }
+  }
+}
+
+/** Linear-shift validity fields and Paschen–Back scale of a level. */
+export function linearValidity(level: HyperfineZeemanLevel, options: ValidityOptions = {}): LinearValidity {
+  const rel = options.relative ?? new Dec("0.01");
+  const absHz = options.absoluteHz ?? new Dec("1000");
+  const maxTesla = options.maxTesla ?? new Dec("10");
+  const solve = hyperfineZeemanSolver(level);
+  const zero = solve(ZERO);
+  const slopes = zero.map((s) => {
+    const g = gF(level.gJ, level.gI, level.I2, level.J2, s.F2);
+    return g === null ? ZERO : level.muB_h.mul(g).mul(s.mF2).div(2);
+  });
+  // index of the first sublevel breaking each criterion at field b, or -1
+  const check = (b: Dec): [number, number] => {
+    const states = solve(b);
+    let r = -1;
+    let a = -1;
+    states.forEach((s, i) => {
+      const exact = s.energy.minus(zero[i]!.energy);
+      const lin = slopes[i]!.mul(b);
+      const err = lin.minus(exact).abs();
+      if (a < 0 && err.gt(absHz)) a = i;
+      if (r < 0 && !slopes[i]!.isZero() && err.gt(rel.mul(exact.abs()))) r = i;
+    });
+    return [r, a];
+  };
+  const limit = (which: 0 | 1): ValidityLimit => {
+    let lo = ZERO;
+    for (const b of validitySamples(maxTesla)) {
+      if (check(b)[which] >= 0) {
+        let hi = b;
+        const tol = new Dec("1e-9");
+        while (hi.minus(lo).gt(hi.mul(tol))) {
+          const mid = lo.plus(hi).div(2);
+          if (check(mid)[which] >= 0) hi = mid;
+          else lo = mid;
+        }
+        const i = check(hi)[which];
+        const s = zero[i]!;
+        return { tesla: hi, sublevel: { F2: s.F2, mF2: s.mF2 } };
+      }
+      lo = b;
+    }
+    return { tesla: null, sublevel: null };
+  };
+  return { relative: limit(0), absolute: limit(1), maxTesla, paschenBackTesla: paschenBackField(level) };
+}
