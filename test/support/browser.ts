@@ -1,0 +1,79 @@
+/**
+ * Headless Debian Chromium driven by playwright-core, and a small static
+ * file server on 127.0.0.1, for the browser tests. Chromium comes from the
+ * Debian package (installed by .ci/run), never from a download.
+ */
+import { createServer, type Server } from "node:http";
+import { existsSync, readFileSync, statSync } from "node:fs";
+import { extname, join, normalize } from "node:path";
+import { chromium, type BrowserContext } from "playwright-core";
+import { tempDir } from "./runBuild.js";
+
+export const CHROMIUM = process.env.CHROMIUM_PATH || "/usr/bin/chromium";
+export const hasChromium = existsSync(CHROMIUM);
+
+const FLAGS = [
+  "--headless",
+  "--no-sandbox",
+  "--disable-gpu",
+  "--disable-quic",
+  "--no-first-run",
+  "--disable-background-networking",
+  "--disable-component-update",
+  "--disable-sync",
+];
+
+export async function launchBrowser(viewport = { width: 1280, height: 900 }): Promise<BrowserContext> {
+  return chromium.launchPersistentContext(tempDir("atlas-chromium-"), {
+    executablePath: CHROMIUM,
+    args: FLAGS,
+    viewport,
+  });
+}
+
+const TYPES: Record<string, string> = {
+  ".html": "text/html; charset=utf-8",
+  ".css": "text/css; charset=utf-8",
+  ".js": "text/javascript; charset=utf-8",
+  ".json": "application/json; charset=utf-8",
+  ".csv": "text/csv; charset=utf-8",
+  ".svg": "image/svg+xml",
+};
+
+export interface StaticServer {
+  /** Base URL including the prefix, ending in "/". */
+  url: string;
+  close(): Promise<void>;
+}
+
+/** Serve `root` under `prefix` (e.g. "/lab/atlas/") on 127.0.0.1 with a random port. */
+export async function serveStatic(root: string, prefix = "/"): Promise<StaticServer> {
+  const server: Server = createServer((req, res) => {
+    const url = new URL(req.url ?? "/", "http://127.0.0.1");
+    let path = decodeURIComponent(url.pathname);
+    if (!path.startsWith(prefix)) {
+      res.writeHead(404).end("outside prefix");
+      return;
+    }
+    path = normalize(path.slice(prefix.length));
+    if (path.startsWith("..")) {
+      res.writeHead(403).end();
+      return;
+    }
+    let file = join(root, path);
+    if (existsSync(file) && statSync(file).isDirectory()) file = join(file, "index.html");
+    if (!existsSync(file)) {
+      res.writeHead(404).end("not found");
+      return;
+    }
+    res.writeHead(200, { "content-type": TYPES[extname(file)] ?? "application/octet-stream" });
+    res.end(readFileSync(file));
+  });
+  await new Promise<void>((r) => server.listen(0, "127.0.0.1", r));
+  const addr = server.address();
+  const port = typeof addr === "object" && addr ? addr.port : 0;
+  return {
+    url: `http://127.0.0.1:${port}${prefix}`,
+    close: () => new Promise<void>((r) => server.close(() => r())),
+  };
+}
