@@ -79,7 +79,8 @@ export function decodeUtf8(bytes: Uint8Array, sink: ProblemSink): string | null 
 
 /**
  * Parse one YAML document. Syntax errors are reported with yaml's own
- * position; anchors, aliases and nesting beyond MAX_DEPTH are reported too.
+ * position; anchors, aliases, explicit tags and nesting beyond MAX_DEPTH
+ * are reported too.
  * Returns null when the file has any such problem, so that nothing reads a
  * half-understood tree.
  */
@@ -146,6 +147,12 @@ function checkTree(src: YamlSource, node: unknown, depth: number, text: string):
     const start = n.range?.[0] ?? 0;
     const amp = text.lastIndexOf(`&${n.anchor}`, start);
     src.sink.add(amp >= 0 ? src.placeOfOffset(amp) : src.place(n), `YAML anchor &${n.anchor} is not allowed`, "remove the anchor and write every value out in full; anchors and aliases are refused in data files");
+  }
+  if ((isScalar(n) || isMap(n) || isSeq(n)) && n.tag) {
+    const shown = n.tag.replace(/^tag:yaml\.org,2002:/, "!!");
+    let bang = text.lastIndexOf("!", n.range?.[0] ?? 0);
+    while (bang > 0 && !/[\s,[{]/.test(text[bang - 1] ?? " ")) bang--; // back to the start of the tag token
+    src.sink.add(bang >= 0 ? src.placeOfOffset(bang) : src.place(n), `YAML tag ${shown} is not allowed`, "remove the tag; values are read as text and checked by the loader");
   }
   if (isMap(n) || isSeq(n)) {
     if (depth >= MAX_DEPTH) {

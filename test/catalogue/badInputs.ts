@@ -87,6 +87,11 @@ export const BAD_INPUTS: readonly BadInput[] = [
     expect: at(R, 16, 13, /YAML alias \*src is not allowed/),
   },
   {
+    name: "YAML tag",
+    files: () => rb(edit(RB87, "spin: 3/2", "spin: !!float 1.5")),
+    expect: at(R, 6, 9, /YAML tag !!float is not allowed; remove the tag/),
+  },
+  {
     name: "nesting deeper than the limit",
     files: () => rb(edit(RB87, `notes: "Alkali test species."`, `notes: ${nested(25)}`)),
     expect: at(R, 9, 27, /YAML is nested more than 20 levels deep/),
