@@ -29,7 +29,7 @@
  * Worked example: 87Rb 5²S1/2 (A = 3417.341305452145 MHz, gJ = 2.00233113,
  * gI = −0.0009951414, μB/h = 13996244917.1 Hz/T): the two-photon line
  * |F=1, mF=−1⟩ ↔ |F=2, mF=1⟩ has zero-field frequency 2A = 6834.68261090429 MHz,
- * first-order sensitivity (μB/h)(gF(2) + gF(1)) = (μB/h)·2gI = −2785.6523… Hz/G,
+ * first-order sensitivity (μB/h)(gF(2) + gF(1)) = (μB/h)·2gI = −2785.6485523… Hz/G,
  * and a field-insensitive point at 3.228917 G.
  */
 import { Dec, ZERO } from "../decimal.js";
