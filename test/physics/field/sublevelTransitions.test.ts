@@ -1,0 +1,37 @@
+import { describe, expect, it } from "vitest";
+import { dec } from "../../../src/physics/decimal.js";
+import { sublevelTransitions } from "../../../src/physics/field/sublevelTransitions.js";
+import { RB87_5S } from "./levels.js";
+
+describe("sublevelTransitions", () => {
+  const lines = sublevelTransitions(RB87_5S, [dec("0"), dec("0.0001")]);
+  const find = (lo: [number, number], up: [number, number]) =>
+    lines.find((l) => l.lower.F2 === lo[0] && l.lower.mF2 === lo[1] && l.upper.F2 === up[0] && l.upper.mF2 === up[1])!;
+
+  it("finds the 87Rb two-photon line |1,−1⟩ ↔ |2,1⟩ field-insensitive near 3.23 G", () => {
+    const l = find([2, -2], [4, 2]);
+    expect(l.kind).toBe("two-photon");
+    expect(l.zeroFieldHz.toString()).toBe("6834682610.90429"); // 2A, Steck
+    // first order (μB/h)·2gI = −2785.6485523 Hz/G (hand arithmetic)
+    expect(l.firstOrder.hzPerGauss.toSignificantDigits(8).toString()).toBe("-2785.6486");
+    expect(l.fieldInsensitive.length).toBe(1);
+    // 3.23 G from memory (magic field of the trapped-clock pair); we compute 3.2289170 G
+    expect(Math.abs(l.fieldInsensitive[0]!.tesla.toNumber() - 3.23e-4)).toBeLessThan(0.01e-4);
+  });
+
+  it("has the clock line with zero first-order and 575.15 Hz/G² second-order sensitivity", () => {
+    const l = find([2, 0], [4, 0]);
+    expect(l.firstOrder.hzPerTesla.abs().lt(dec("1e-40"))).toBe(true);
+    expect(Math.abs(l.secondOrder!.hzPerGauss2.toNumber() - 575.15)).toBeLessThan(0.01); // Steck, Table 4
+    expect(l.atFields[0]!.hz.toString()).toBe("6834682610.90429");
+  });
+
+  it("lists ΔF = 0 Zeeman lines and excludes ΔF = 0, ΔmF = 0", () => {
+    expect(lines.some((l) => l.lower.F2 === l.upper.F2 && l.lower.mF2 === l.upper.mF2)).toBe(false);
+    const z = find([4, 0], [4, 2]);
+    expect(z.zeroFieldHz.isZero()).toBe(true);
+    expect(z.firstOrder.hzPerTesla.gt(0)).toBe(true);
+    // all zero-field frequencies are non-negative by construction of upper/lower
+    expect(lines.every((l) => !l.zeroFieldHz.isNegative())).toBe(true);
+  });
+});
