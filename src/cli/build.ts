@@ -13,6 +13,7 @@ import { fileURLToPath } from "node:url";
 import { InputProblems } from "../data/inputError.js";
 import { buildDateFrom, loadAtlas } from "../site/loadAtlas.js";
 import { makeStagingDir, publish, recoverInterrupted } from "./publish.js";
+import { writeAnchors } from "./anchors.js";
 import { selfCheck } from "./selfCheck.js";
 
 const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), "../..");
@@ -56,6 +57,7 @@ async function main(): Promise<void> {
       quietMode: true,
     });
     await eleventy.write();
+    writeAnchors(staging);
     const problems = selfCheck(staging, atlas);
     if (problems.length > 0) {
       cleanUp();

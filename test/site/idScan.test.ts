@@ -1,0 +1,66 @@
+import { describe, expect, it } from "vitest";
+import { ANCHORS_FORMAT, anchorsManifest, decodeAttribute, lostAnchors, manifestText, parseManifest, scanIds, startTags } from "../../src/site/idScan.js";
+
+describe("scanIds", () => {
+  it("finds ids in double, single and unquoted attributes, in any case", () => {
+    const html = `<p id="a"></p><div ID='b' class=x></div><span id=c>t</span><td class="n" id="level:5s-S1/2:F=2:mF=-1">`;
+    expect(scanIds(html)).toEqual(["a", "b", "c", "level:5s-S1/2:F=2:mF=-1"]);
+  });
+
+  it("decodes character references, so an escaped id reads as the browser reads it", () => {
+    expect(scanIds(`<tr id="line:a&amp;b"></tr><tr id="x&#39;y&#x2F;z"></tr>`)).toEqual(["line:a&b", "x'y/z"]);
+    expect(decodeAttribute("&lt;&gt;&quot;&unknown;")).toBe(`<>"&unknown;`);
+  });
+
+  it("ignores ids in comments, scripts and styles and inside other attribute values", () => {
+    const html = `<!-- <p id="c1"> --><script>var s = '<p id="s1">';</script><style>#x{}</style><a title='<b id="t1">' id="real">`;
+    expect(scanIds(html)).toEqual(["real"]);
+  });
+
+  it("reads a > inside a quoted value as part of the value", () => {
+    const tags = startTags(`<a title="1 > 0" id="after">x</a>`);
+    expect(tags[0]?.attrs.get("id")).toBe("after");
+    expect(tags[0]?.attrs.get("title")).toBe("1 > 0");
+  });
+
+  it("lists a repeated id once and skips empty ids", () => {
+    expect(scanIds(`<p id="b"></p><p id="a"></p><p id="b"></p><p id=""></p>`)).toEqual(["a", "b"]);
+  });
+
+  it("sorts by code point, independent of locale", () => {
+    expect(scanIds(`<p id="b"></p><p id="B"></p><p id="a"></p><p id="Ä"></p>`)).toEqual(["B", "a", "b", "Ä"]);
+  });
+});
+
+describe("anchors manifest", () => {
+  it("sorts pages and writes the format tag", () => {
+    const m = anchorsManifest([
+      ["species/rb87/index.html", `<tr id="line:D2"></tr><tr id="line:D1"></tr>`],
+      ["index.html", `<main id="main">`],
+    ]);
+    expect(Object.keys(m.pages)).toEqual(["index.html", "species/rb87/index.html"]);
+    expect(m.pages["species/rb87/index.html"]).toEqual(["line:D1", "line:D2"]);
+    expect(manifestText(m)).toBe(JSON.stringify({ format: ANCHORS_FORMAT, pages: m.pages }, null, 2) + "\n");
+  });
+
+  it("reports anchors that vanished, and marks the ones whose page vanished", () => {
+    const before = anchorsManifest([
+      ["a.html", `<p id="x"></p><p id="y"></p>`],
+      ["b.html", `<p id="z"></p>`],
+    ]);
+    const after = anchorsManifest([["a.html", `<p id="y"></p><p id="new"></p>`]]);
+    expect(lostAnchors(before, after)).toEqual([
+      { page: "a.html", anchor: "x", pageGone: false },
+      { page: "b.html", anchor: "z", pageGone: true },
+    ]);
+    expect(lostAnchors(after, after)).toEqual([]);
+  });
+
+  it("refuses a file that is not an anchors manifest", () => {
+    expect(parseManifest({ format: "other", pages: {} })).toMatch(/format/);
+    expect(parseManifest({ format: ANCHORS_FORMAT, pages: { "a.html": [1] } })).toMatch(/a\.html/);
+    expect(parseManifest({ format: ANCHORS_FORMAT, pages: [] })).toMatch(/pages/);
+    expect(parseManifest(null)).toMatch(/object/);
+    expect(typeof parseManifest({ format: ANCHORS_FORMAT, pages: { "a.html": ["x"] } })).toBe("object");
+  });
+});
