@@ -21,6 +21,7 @@
  * [1, −1]/√2 and [1, 1]/√2 (up to sign).
  */
 import { Dec, ONE, ZERO } from "../decimal.js";
+import { symmetricEigenFloat } from "./symmetricEigenFloat.js";
 
 export interface SymmetricEigen {
   /** Eigenvalues, ascending. */
@@ -32,6 +33,11 @@ export interface SymmetricEigen {
 const STOP = new Dec("1e-30");
 const SMALL = new Dec("1e-6");
 const MAX_SWEEPS = 60;
+/** Below this |x|, 1/√(1+x) comes from its series instead of a Dec square root. */
+const TINY = new Dec("1e-10");
+const TWO = new Dec("2");
+/** Largest |a_ij|/|a_ii − a_jj| for the perturbation step: errors ~(ratio)²·|a_ij| in values. */
+const PERTURBATIVE = 1e-14;
 const C = (t: string) => new Dec(t);
 // Taylor coefficients of √(1+x) and 1/√(1+x); with |x| < 1e-12 six terms leave < 1e-72
 const SQRT_SERIES = [C("0.5"), C("-0.125"), C("0.0625"), C("-0.0390625"), C("0.02734375")];
@@ -104,74 +110,87 @@ function jacobiDec(a: Dec[][], v: Dec[][], threshold2: Dec): void {
   throw new Error("Jacobi iteration did not converge");
 }
 
-/** Float64 cyclic Jacobi; returns the eigenvector matrix (columns). */
-function jacobiFloat(m: number[][]): number[][] {
-  const n = m.length;
-  const a = m.map((r) => r.slice());
-  const v: number[][] = a.map((_, i) => a.map((__, j) => (i === j ? 1 : 0)));
-  for (let sweep = 0; sweep < 100; sweep++) {
-    let off = 0;
-    let norm = 0;
-    for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) {
-      const x = a[i]![j]! * a[i]![j]!;
-      norm += x;
-      if (i !== j) off += x;
-    }
-    if (off <= 1e-34 * norm || off === 0) break;
-    for (let p = 0; p < n - 1; p++) {
-      for (let q = p + 1; q < n; q++) {
-        const apq = a[p]![q]!;
-        if (apq === 0) continue;
-        const theta = (a[q]![q]! - a[p]![p]!) / (2 * apq);
-        const t = (theta >= 0 ? 1 : -1) / (Math.abs(theta) + Math.sqrt(theta * theta + 1));
-        const c = 1 / Math.sqrt(t * t + 1);
-        const s = t * c;
-        a[p]![p] = a[p]![p]! - t * apq;
-        a[q]![q] = a[q]![q]! + t * apq;
-        a[p]![q] = 0;
-        a[q]![p] = 0;
-        for (let r = 0; r < n; r++) {
-          if (r !== p && r !== q) {
-            const g = a[r]![p]!;
-            const k = a[r]![q]!;
-            a[r]![p] = a[p]![r] = c * g - s * k;
-            a[r]![q] = a[q]![r] = s * g + c * k;
-          }
-          const g = v[r]![p]!;
-          const k = v[r]![q]!;
-          v[r]![p] = c * g - s * k;
-          v[r]![q] = s * g + c * k;
-        }
-      }
-    }
-  }
-  return v;
+/** 1/√(1+x) for |x| < 1e-10 by its series (error < 1e-70), else by a Dec square root. */
+function invSqrtOnePlus(x: Dec): Dec {
+  if (x.abs().lt(TINY)) return series(x, INVSQRT_SERIES);
+  return ONE.div(ONE.plus(x).sqrt());
 }
 
 /** Columns of a float matrix, orthonormalized in Dec by modified Gram–Schmidt. */
-function orthonormalColumns(v: number[][]): Dec[][] {
-  const n = v.length;
+function orthonormalColumns(vectors: readonly (readonly number[])[]): Dec[][] {
   // the float digits only pick a starting basis; any 17-digit text of them will do
   const cols: Dec[][] = [];
-  for (let j = 0; j < n; j++) {
-    let col = v.map((row) => new Dec(row[j]!.toPrecision(17)));
+  for (const vec of vectors) {
+    let col = vec.map((x) => new Dec(x.toPrecision(17)));
     for (const prev of cols) {
       let dot = ZERO;
-      for (let i = 0; i < n; i++) dot = dot.plus(prev[i]!.mul(col[i]!));
-      col = col.map((x, i) => x.minus(dot.mul(prev[i]!)));
+      for (let i = 0; i < col.length; i++) dot = dot.plus(prev[i]!.mul(col[i]!));
+      if (!dot.isZero()) col = col.map((x, i) => x.minus(dot.mul(prev[i]!)));
     }
     let norm2 = ZERO;
     for (const x of col) norm2 = norm2.plus(x.mul(x));
-    const inv = ONE.div(norm2.sqrt());
+    const inv = invSqrtOnePlus(norm2.minus(ONE));
     cols.push(col.map((x) => x.mul(inv)));
   }
   return cols;
 }
 
-export function symmetricEigen(matrix: readonly (readonly Dec[])[]): SymmetricEigen {
+/**
+ * Second-order perturbation step on a = QᵀHQ whose off-diagonal elements are
+ * tiny against the gaps of its diagonal: values a_ii + Σ_j a_ij²/(a_ii − a_jj),
+ * vectors q_i + Σ_j a_ij/(a_ii − a_jj)·q_j, renormalized. The small
+ * vector corrections are computed in float64 from the Dec elements (they need
+ * only ~16 digits of their own, being ≲1e-16 of the result) and enter as Dec
+ * text; the value corrections are computed in Dec; each of them is added to one diagonal and taken from the other,
+ * so the trace stays that of a to Dec precision. Returns null when some
+ * |a_ij| exceeds PERTURBATIVE·|a_ii − a_jj|; Jacobi then does the job.
+ */
+function perturbationStep(a: Dec[][], cols: Dec[][], seed: readonly (readonly number[])[]): SymmetricEigen | null {
+  const n = a.length;
+  const coef: number[][] = a.map(() => a.map(() => 0));
+  const values = a.map((row, i) => row[i]!);
+  for (let i = 0; i < n; i++) {
+    for (let j = i + 1; j < n; j++) {
+      const aij = a[i]![j]!;
+      if (aij.isZero()) continue;
+      const x = aij.toNumber();
+      const gapDec = a[i]![i]!.minus(a[j]![j]!);
+      const gap = gapDec.toNumber();
+      if (!(Math.abs(x) <= PERTURBATIVE * Math.abs(gap))) return null;
+      coef[i]![j] = x / gap;
+      coef[j]![i] = -x / gap;
+      // a_ij²/gap to full Dec precision: one Newton step on the float reciprocal (cheaper than a Dec division)
+      const r0 = new Dec((1 / gap).toPrecision(17));
+      const r = r0.mul(TWO.minus(gapDec.mul(r0)));
+      const t = aij.mul(aij).mul(r);
+      values[i] = values[i]!.plus(t);
+      values[j] = values[j]!.minus(t);
+    }
+  }
+  const vectors = cols.map((col, i) => {
+    const out = col.map((x, r) => {
+      let c = 0;
+      for (let j = 0; j < n; j++) if (j !== i) c += coef[i]![j]! * seed[j]![r]!;
+      return c === 0 ? x : x.plus(new Dec(c.toPrecision(17)));
+    });
+    let norm2 = ZERO;
+    for (const x of out) norm2 = norm2.plus(x.mul(x));
+    const inv = invSqrtOnePlus(norm2.minus(ONE));
+    return inv.eq(ONE) ? out : out.map((x) => x.mul(inv));
+  });
+  const order = [...Array(n).keys()].sort((i, j) => values[i]!.cmp(values[j]!) || i - j);
+  return { values: order.map((i) => values[i]!), vectors: order.map((i) => vectors[i]!) };
+}
+
+/**
+ * Diagonalize a real symmetric Dec matrix (see the module comment).
+ * `floatMatrix`, optional, is the same matrix in float64 when the caller
+ * already has it (it only seeds the float stage; omitted, it is derived).
+ */
+export function symmetricEigen(matrix: readonly (readonly Dec[])[], floatMatrix?: readonly (readonly number[])[]): SymmetricEigen {
   const n = matrix.length;
   let norm2 = ZERO;
-  for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) norm2 = norm2.plus(matrix[i]![j]!.mul(matrix[i]![j]!));
+  for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) if (!matrix[i]![j]!.isZero()) norm2 = norm2.plus(matrix[i]![j]!.mul(matrix[i]![j]!));
   const threshold2 = norm2.mul(STOP).mul(STOP);
   let a: Dec[][];
   let v: Dec[][];
@@ -179,11 +198,13 @@ export function symmetricEigen(matrix: readonly (readonly Dec[])[]): SymmetricEi
     a = matrix.map((row) => row.slice());
     v = a.map((_, i) => a.map((__, j) => (i === j ? ONE : ZERO)));
   } else {
-    const cols = orthonormalColumns(jacobiFloat(matrix.map((row) => row.map((x) => x.toNumber()))));
-    // a = Qᵀ·H·Q with Q's columns `cols`
-    const hq = cols.map((col) => matrix.map((row) => {
+    const seed = symmetricEigenFloat(floatMatrix ?? matrix.map((row) => row.map((x) => x.toNumber()))).vectors;
+    const cols = orthonormalColumns(seed);
+    // a = Qᵀ·H·Q with Q's columns `cols`; H is banded here, so skip its zeros
+    const nz = matrix.map((row) => [...row.keys()].filter((k) => !row[k]!.isZero()));
+    const hq = cols.map((col) => matrix.map((row, r) => {
       let s = ZERO;
-      for (let k = 0; k < n; k++) if (!row[k]!.isZero()) s = s.plus(row[k]!.mul(col[k]!));
+      for (const k of nz[r]!) s = s.plus(row[k]!.mul(col[k]!));
       return s;
     }));
     a = cols.map(() => cols.map(() => ZERO));
@@ -195,6 +216,8 @@ export function symmetricEigen(matrix: readonly (readonly Dec[])[]): SymmetricEi
         a[j]![i] = s;
       }
     }
+    const quick = perturbationStep(a, cols, seed);
+    if (quick) return quick;
     v = cols[0]!.map((_, r) => cols.map((col) => col[r]!));
   }
   jacobiDec(a, v, threshold2);
