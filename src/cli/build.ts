@@ -4,42 +4,41 @@
  *
  * Environment: ATLAS_DATA (data folder, default "data"), ATLAS_OUT (output
  * folder, default "_site"), SOURCE_DATE_EPOCH (build date, for reproducible
- * builds). Exit codes: 0 published; 1 input problems or a failed build or
- * self-check (the old output untouched); 130/143 interrupted.
+ * builds), ATLAS_TIMINGS=1 (print `timing <phase> <ms>` lines to stderr),
+ * ATLAS_DEBUG=1 (print the stack of an unexpected failure).
+ * Test only: ATLAS_FAULT=render (fail after rendering), selfcheck (corrupt
+ * the staged site so the self-checks fail), stall (stop before the
+ * self-checks and wait to be signalled; prints "stalled" to stderr).
+ * Exit codes: 0 published; 1 input problems or a failed build or
+ * self-check (the old output untouched); 130/143 interrupted (SIGINT/SIGTERM).
  */
-import { rmSync } from "node:fs";
-import { dirname, resolve } from "node:path";
+import { appendFileSync, rmSync } from "node:fs";
+import { dirname, join, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
 import { InputProblems } from "../data/inputError.js";
 import { buildDateFrom, loadAtlas } from "../site/loadAtlas.js";
 import { makeStagingDir, publish, recoverInterrupted } from "./publish.js";
 import { writeAnchors } from "./anchors.js";
 import { selfCheck } from "./selfCheck.js";
+import { formatTimings, timed, timedAsync } from "./timings.js";
 
 const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), "../..");
 
-function fail(message: string): never {
-  process.stderr.write(message.endsWith("\n") ? message : message + "\n");
-  process.exit(1);
-}
+/** Thrown to stop the build with a message for the user (no stack trace). */
+class BuildStop extends Error {}
+
+let staging: string | null = null;
+const cleanUp = (): void => {
+  if (staging) rmSync(staging, { recursive: true, force: true });
+  staging = null;
+};
 
 async function main(): Promise<void> {
   const dataDir = resolve(process.env.ATLAS_DATA || "data");
   const out = resolve(process.env.ATLAS_OUT || "_site");
   const buildDate = buildDateFrom(process.env);
+  const fault = process.env.ATLAS_FAULT ?? "";
 
-  recoverInterrupted(out);
-
-  let atlas;
-  try {
-    atlas = loadAtlas({ dataDir, buildDate });
-  } catch (e) {
-    if (e instanceof InputProblems) fail(`${e.format()}\n${e.problems.length} problem(s) in ${dataDir}; nothing was published.`);
-    throw e;
-  }
-
-  const staging = makeStagingDir(out);
-  const cleanUp = () => rmSync(staging, { recursive: true, force: true });
   for (const [sig, code] of [["SIGINT", 130], ["SIGTERM", 143]] as const) {
     process.on(sig, () => {
       cleanUp();
@@ -48,6 +47,17 @@ async function main(): Promise<void> {
     });
   }
 
+  recoverInterrupted(out);
+
+  let atlas;
+  try {
+    atlas = loadAtlas({ dataDir, buildDate });
+  } catch (e) {
+    if (e instanceof InputProblems) throw new BuildStop(`${e.format()}\n${e.problems.length} problem(s) in ${dataDir}; nothing was published.`);
+    throw e;
+  }
+
+  staging = makeStagingDir(out);
   try {
     process.env.ATLAS_DATA = dataDir;
     process.chdir(ROOT);
@@ -56,19 +66,39 @@ async function main(): Promise<void> {
       configPath: resolve(ROOT, ".eleventy.js"),
       quietMode: true,
     });
-    await eleventy.write();
-    writeAnchors(staging);
-    const problems = selfCheck(staging, atlas);
-    if (problems.length > 0) {
-      cleanUp();
-      fail(`self-check failed; nothing was published:\n${problems.map((p) => `  ${p}`).join("\n")}`);
+    await timedAsync("render", () => eleventy.write());
+    if (fault === "render") throw new Error("rendering failed (ATLAS_FAULT=render)");
+    if (fault === "selfcheck") appendFileSync(join(staging, "index.html"), '<p id="fault"></p><p id="fault"></p>\n');
+    if (fault === "stall") {
+      process.stderr.write(`stalled with staging folder ${staging}\n`);
+      await new Promise(() => setInterval(() => {}, 1 << 30));
     }
-    publish(staging, out);
+    const stagedAt = staging;
+    writeAnchors(stagedAt);
+    const problems = timed("check", () => selfCheck(stagedAt, atlas));
+    if (problems.length > 0) {
+      throw new BuildStop(`self-check failed; ${out} left as it was:\n${problems.map((p) => `  ${p}`).join("\n")}`);
+    }
+    timed("publish", () => publish(stagedAt, out));
+    staging = null;
   } catch (e) {
     cleanUp();
-    fail(`build failed; ${out} left as it was:\n  ${e instanceof Error ? e.message : String(e)}`);
+    if (e instanceof BuildStop) throw e;
+    throw new BuildStop(`build failed; ${out} left as it was:\n  ${e instanceof Error ? e.message : String(e)}`, { cause: e });
   }
+  if (process.env.ATLAS_TIMINGS === "1") process.stderr.write(formatTimings() + "\n");
   process.stdout.write(`built ${atlas.species.length} species into ${out}\n`);
 }
 
-await main();
+try {
+  await main();
+} catch (e) {
+  cleanUp();
+  const message = e instanceof Error ? e.message : String(e);
+  process.stderr.write(e instanceof BuildStop ? `${message}\n` : `build failed: ${message}\n`);
+  if (process.env.ATLAS_DEBUG === "1") {
+    const inner = e instanceof BuildStop && e.cause instanceof Error ? e.cause : e;
+    process.stderr.write(`${inner instanceof Error ? inner.stack : String(inner)}\n`);
+  }
+  process.exit(1);
+}

@@ -1,12 +1,43 @@
 /**
- * Checks run on every staged build before it is published. Each returns
- * human-readable problems; an empty list means the build may go live.
+ * Checks run on every staged build before it is published (see
+ * src/checks/). Each returns human-readable problems; an empty list means
+ * the build may go live. They read the staged files, not the models the
+ * pages were made from, so what is checked is what would be published.
  */
-import { existsSync, readFileSync } from "node:fs";
-import { join } from "node:path";
+import { existsSync, readdirSync, readFileSync } from "node:fs";
+import { join, relative, sep } from "node:path";
+import { checkExportSchema } from "../checks/exportSchema.js";
+import { checkFiniteNumbers } from "../checks/finiteNumbers.js";
+import { checkLineReferences } from "../checks/lineReferences.js";
+import { checkStrengthSums } from "../checks/strengthSums.js";
+import { checkUniqueAnchors } from "../checks/uniqueAnchors.js";
 import type { Atlas } from "../site/atlas.js";
 
-export function selfCheck(staging: string, atlas: Atlas): string[] {
+/** Every check of one parsed export. */
+export function checkExport(value: unknown, file: string): string[] {
+  return [
+    ...checkExportSchema(value, file),
+    ...checkStrengthSums(value, file),
+    ...checkFiniteNumbers(value, file),
+    ...checkLineReferences(value, file),
+  ];
+}
+
+/** Files under `root` whose name ends in `ext`, as sorted "/"-separated relative paths. */
+function filesEnding(root: string, ext: string): string[] {
+  const out: string[] = [];
+  const walk = (dir: string): void => {
+    for (const e of readdirSync(dir, { withFileTypes: true })) {
+      const p = join(dir, e.name);
+      if (e.isDirectory()) walk(p);
+      else if (e.isFile() && e.name.endsWith(ext)) out.push(relative(root, p).split(sep).join("/"));
+    }
+  };
+  walk(root);
+  return out.sort();
+}
+
+export function selfCheck(staging: string, atlas: Pick<Atlas, "species">): string[] {
   const problems: string[] = [];
   for (const s of atlas.species) {
     const path = join(staging, s.exportUrl);
@@ -14,11 +45,17 @@ export function selfCheck(staging: string, atlas: Atlas): string[] {
       problems.push(`missing export ${s.exportUrl}`);
       continue;
     }
+    let value: unknown;
     try {
-      JSON.parse(readFileSync(path, "utf8"));
+      value = JSON.parse(readFileSync(path, "utf8"));
     } catch {
       problems.push(`export ${s.exportUrl} is not valid JSON`);
+      continue;
     }
+    problems.push(...checkExport(value, s.exportUrl));
   }
+  const pages = filesEnding(staging, ".html");
+  if (pages.length === 0) problems.push("no HTML pages were written");
+  for (const page of pages) problems.push(...checkUniqueAnchors(readFileSync(join(staging, page), "utf8"), page));
   return problems;
 }

@@ -7,6 +7,7 @@
 import { resolve } from "node:path";
 import { loadDataFolder } from "../data/loadDataFolder.js";
 import { editionByName } from "../physics/constants/editions.js";
+import { timed } from "../cli/timings.js";
 import { buildAtlas, type Atlas } from "./atlas.js";
 
 const memo = new Map<string, Atlas>();
@@ -21,10 +22,11 @@ export function loadAtlas(opts: AtlasOptions): Atlas {
   const key = `${resolve(opts.dataDir)}\0${opts.buildDate}`;
   const hit = memo.get(key);
   if (hit) return hit;
-  const folder = loadDataFolder(opts.dataDir);
+  const folder = timed("load", () => loadDataFolder(opts.dataDir));
   // The data layer has checked the edition name against editions.ts.
   const constants = editionByName(folder.site.constants)!;
-  const atlas = buildAtlas(folder, constants, opts.buildDate);
+  // "compute": physics, page models, CSV and JSON text (ATLAS_TIMINGS=1 prints it).
+  const atlas = timed("compute", () => buildAtlas(folder, constants, opts.buildDate));
   memo.set(key, atlas);
   return atlas;
 }
