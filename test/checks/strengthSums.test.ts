@@ -1,0 +1,37 @@
+import { describe, expect, it } from "vitest";
+import { checkStrengthSums } from "../../src/checks/strengthSums.js";
+import { realExport } from "./realExport.js";
+
+describe("the strength-sum check", () => {
+  it("accepts every line the build makes", () => {
+    expect(checkStrengthSums(realExport("rb87"), "rb87.json")).toEqual([]);
+    expect(checkStrengthSums(realExport("sr88"), "sr88.json")).toEqual([]);
+  });
+
+  it("accepts the Na D2 textbook strengths 3:1:2:2:1:3 over 12, which sum to 1", () => {
+    // Na D2 relative strengths: Condon & Shortley (1935) §16, common practice.
+    const line = { id: "D2", components: ["1/4", "1/12", "1/6", "1/6", "1/12", "1/4"].map((strength) => ({ strength })) };
+    expect(checkStrengthSums({ lines: [line] }, "x.json")).toEqual([]);
+  });
+
+  it("reports a line with a dropped component", () => {
+    const e = realExport("rb87");
+    e.lines[1].components.pop();
+    expect(checkStrengthSums(e, "rb87.json")).toEqual([expect.stringMatching(/^rb87\.json: line "D2" strengths sum to \d+\/\d+, not 1$/)]);
+  });
+
+  it("reports a sum that misses 1 by far less than a float could see", () => {
+    const line = { id: "L", components: [{ strength: "1/2" }, { strength: "500000000000000000001/1000000000000000000000" }] };
+    expect(checkStrengthSums({ lines: [line] }, "x.json")).toEqual(['x.json: line "L" strengths sum to 1000000000000000000001/1000000000000000000000, not 1']);
+  });
+
+  it("reports a strength written as a decimal instead of an exact fraction", () => {
+    const line = { id: "L", components: [{ strength: "0.5" }, { strength: "1/2" }] };
+    expect(checkStrengthSums({ lines: [line] }, "x.json")).toEqual(['x.json: line "L" component #0 has strength "0.5", not an exact fraction']);
+  });
+
+  it("reports a zero or negative strength", () => {
+    const line = { id: "L", components: [{ strength: "3/2" }, { strength: "-1/2" }] };
+    expect(checkStrengthSums({ lines: [line] }, "x.json")).toEqual(['x.json: line "L" component #1 has strength -1/2, not positive']);
+  });
+});
