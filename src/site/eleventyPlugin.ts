@@ -3,6 +3,7 @@
  * passthrough copy the templates rely on, registered in one place.
  */
 import { relativeUrl } from "./relativeUrl.js";
+import { searchData, searchIndexScript, type SearchSource } from "./searchIndex.js";
 
 // Eleventy's UserConfig has no published types; the few methods used here are typed locally.
 interface EleventyConfigLike {
@@ -16,6 +17,8 @@ interface EleventyConfigLike {
 export function atlasPlugin(eleventyConfig: EleventyConfigLike): void {
   // Static assets and the published input schemas.
   eleventyConfig.addPassthroughCopy({ "templates/assets": "assets", schema: "schema" });
+  // The search library as a classic script (module scripts do not load from file://).
+  eleventyConfig.addPassthroughCopy({ "node_modules/minisearch/dist/umd/index.js": "assets/minisearch.js" });
 
   // Every site-root link becomes relative to its page (works from file:// and under any prefix).
   eleventyConfig.htmlTransformer.addUrlTransform(
@@ -28,4 +31,9 @@ export function atlasPlugin(eleventyConfig: EleventyConfigLike): void {
 
   // A value as JSON for an inline data attribute or script.
   eleventyConfig.addFilter("toJson", (value: never) => JSON.stringify(value));
+
+  // The relative path from a page to the site root ("./", "../../"), for <body data-root> (finder links).
+  eleventyConfig.addFilter("rootPath", (pageUrl: string) => relativeUrl("/index.html", pageUrl).replace(/index\.html$/, "") || "./");
+  // assets/search-index.js from the atlas (templates/search-index.njk).
+  eleventyConfig.addFilter("searchIndexScript", (atlas: SearchSource) => searchIndexScript(searchData(atlas)));
 }
