@@ -5,7 +5,10 @@
 import type { DataFolder } from "../data/model.js";
 import type { ConstantsEdition } from "../physics/constants/constant.js";
 import { listConstants } from "../physics/constants/constant.js";
+import { timed } from "../cli/timings.js";
 import { computeSpecies } from "../results/computeSpecies.js";
+import { computeFields, type SpeciesFieldResult } from "../results/computeFields.js";
+import { fieldSections, fieldTables, type FieldSections } from "./fieldSections.js";
 import type { SpeciesResult } from "../results/types.js";
 import { tableCsv } from "./csv.js";
 import { speciesExport } from "./exportJson.js";
@@ -26,7 +29,10 @@ export interface SpeciesEntry {
   url: string;
   exportUrl: string;
   result: SpeciesResult;
+  fields: SpeciesFieldResult;
   page: SpeciesPage;
+  /** Field-dependent sections of the species page. */
+  fieldPage: FieldSections;
   /** Pretty-printed JSON export. */
   exportJson: string;
   summary: { levels: number; lines: number; nuclearSpin: string | null };
@@ -52,17 +58,22 @@ export function buildAtlas(folder: DataFolder, constants: ConstantsEdition, buil
   const species = [...folder.species]
     .sort((a, b) => a.id.localeCompare(b.id, "en"))
     .map((input): SpeciesEntry => {
-      const result = computeSpecies(input, constants);
+      const result = timed("physics", () => computeSpecies(input, constants));
+      const fields = timed("physics", () => computeFields(result, constants, folder.site.fields));
       const url = `species/${input.id}/`;
       const page = speciesPage(result, `species/${input.id}/csv`);
-      const exportJson = JSON.stringify(speciesExport(result, build), null, 2) + "\n";
+      const fieldPage = fieldSections(result, fields, folder.site.fields, `species/${input.id}/csv`);
+      const exportJson =
+        JSON.stringify(speciesExport(result, build, { result: fields, configured: folder.site.fields }), null, 2) + "\n";
       return {
         id: input.id,
         label: input.label,
         url,
         exportUrl: `export/${input.id}.json`,
         result,
+        fields,
         page,
+        fieldPage,
         exportJson,
         summary: {
           levels: input.levels.length,
@@ -104,6 +115,7 @@ export function buildAtlas(folder: DataFolder, constants: ConstantsEdition, buil
       if (sec.hyperfineSublevels) tables.push(sec.hyperfineSublevels);
     }
     for (const sec of s.page.lineSections) tables.push(sec.components);
+    tables.push(...fieldTables(s.fieldPage));
   }
   return {
     title: folder.site.title,

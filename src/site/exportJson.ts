@@ -8,6 +8,8 @@ import type { Dec } from "../physics/decimal.js";
 import { exportText } from "../physics/decimal.js";
 import { formatDoubled } from "../physics/quantum.js";
 import type { SpeciesResult } from "../results/types.js";
+import type { SpeciesFieldResult } from "../results/computeFields.js";
+import type { ConfiguredField, LevelFieldResult, LineFieldResult } from "../results/fieldTypes.js";
 
 export const EXPORT_DIGITS = 30;
 export const EXPORT_FORMAT = "sublevel-atlas/export@1";
@@ -19,8 +21,95 @@ export interface ExportContext {
   dataVersion: string;
 }
 
+const fieldText = (t: Dec) => exportText(t, EXPORT_DIGITS);
+
+/** `field_table` and the other field-dependent keys of one level. */
+function levelFieldExport(f: LevelFieldResult, fields: ConfiguredField[]) {
+  return {
+    field_table: fields.map((b, i) => ({
+      B_T: fieldText(b.tesla),
+      B_text: b.text,
+      states: f.rows.map((r) => ({
+        F: formatDoubled(r.F2),
+        mF: formatDoubled(r.mF2),
+        E_Hz: num(r.energies[i]!),
+        high_field: { mJ: formatDoubled(r.highField.mJ2), mI: formatDoubled(r.highField.mI2) },
+      })),
+    })),
+    quadratic: f.validity
+      ? f.rows.map((r) => ({
+          F: formatDoubled(r.F2),
+          mF: formatDoubled(r.mF2),
+          Hz_per_T2: num(r.quadraticPerTesla2),
+          Hz_per_G2: r.quadraticPerTesla2 === null ? null : num(r.quadraticPerTesla2.mul("1e-8")),
+        }))
+      : [],
+    linear_validity: f.validity
+      ? {
+          within_1_percent_up_to_T: num(f.validity.relative.tesla),
+          within_1_kHz_up_to_T: num(f.validity.absolute.tesla),
+          searched_up_to_T: num(f.validity.maxTesla),
+          paschen_back_scale_T: num(f.validity.paschenBackTesla),
+        }
+      : null,
+    sublevel_transitions: f.transitions.map((t) => ({
+      lower: { F: formatDoubled(t.lower.F2), mF: formatDoubled(t.lower.mF2) },
+      upper: { F: formatDoubled(t.upper.F2), mF: formatDoubled(t.upper.mF2) },
+      kind: t.kind,
+      zero_field_Hz: num(t.zeroFieldHz),
+      first_order_Hz_per_T: num(t.firstOrder.hzPerTesla),
+      second_order_Hz_per_T2: t.secondOrder ? num(t.secondOrder.hzPerTesla2) : null,
+      at_fields: t.atFields.map((a) => ({ B_T: fieldText(a.tesla), Hz: num(a.hz) })),
+      field_insensitive: t.fieldInsensitive.map((p) => ({ B_T: num(p.tesla), Hz: num(p.hz) })),
+    })),
+  };
+}
+
+function lineFieldExport(f: LineFieldResult) {
+  return {
+    at_fields: f.atFields.map((a) => ({
+      B_T: fieldText(a.field.tesla),
+      B_text: a.field.text,
+      regime: a.regime,
+      model: a.model,
+      components: a.components.map((c) => ({
+        upper: c.upperLabel,
+        lower: c.lowerLabel,
+        delta_m: c.q,
+        polarization: c.polarization,
+        relative_strength: exportText(c.strength, 20),
+        shift_Hz: num(c.shiftHz),
+      })),
+    })),
+    hyperfine_groups: f.hyperfine
+      ? f.hyperfine.map((g) => ({
+          F_upper: formatDoubled(g.Fu2),
+          F_lower: formatDoubled(g.Fl2),
+          strength: g.strength.toString(),
+          offset_Hz: num(g.offset),
+          components: g.components.map((c) => ({
+            mF_upper: formatDoubled(c.mFu2),
+            mF_lower: formatDoubled(c.mFl2),
+            polarization: c.polarization,
+            strength: c.strength.toString(),
+            cycling: c.cycling,
+            shift_Hz_per_T: num(c.shiftHzPerT),
+          })),
+        }))
+      : [],
+  };
+}
+
 /** Plain object of the export; `JSON.stringify(…, null, 2)` gives the file. */
-export function speciesExport(s: SpeciesResult, ctx: ExportContext, extra: (levelId: string) => Record<string, unknown> = () => ({})) {
+export function speciesExport(s: SpeciesResult, ctx: ExportContext, fields?: { result: SpeciesFieldResult; configured: ConfiguredField[] }) {
+  const extra = (levelId: string) => {
+    const f = fields?.result.levels.get(levelId);
+    return f && fields ? levelFieldExport(f, fields.configured) : {};
+  };
+  const lineExtra = (lineId: string) => {
+    const f = fields?.result.lines.get(lineId);
+    return f ? lineFieldExport(f) : {};
+  };
   return {
     format: EXPORT_FORMAT,
     id: s.input.id,
@@ -71,6 +160,7 @@ export function speciesExport(s: SpeciesResult, ctx: ExportContext, extra: (leve
         shift_Hz_per_T: num(c.shiftHzPerT),
         strength: c.strength.toString(),
       })),
+      ...lineExtra(ln.input.id),
     })),
   };
 }

@@ -1,0 +1,270 @@
+/**
+ * Field-dependent results of one species at the configured bias fields.
+ * Pure: no file system, no clock. Which physics each number comes from is
+ * chosen here, per level and per line, and said in the result (`model`,
+ * `regime`) so the pages can state it.
+ */
+import { Dec, ZERO } from "../physics/decimal.js";
+import type { ConstantsEdition } from "../physics/constants/constant.js";
+import { val } from "../physics/constants/constant.js";
+import { hyperfineZeemanSolver, type HyperfineZeemanLevel } from "../physics/field/hyperfineZeeman.js";
+import { quadraticZeemanCoefficient } from "../physics/field/quadraticZeeman.js";
+import { linearValidity } from "../physics/field/validity.js";
+import { sublevelTransitions } from "../physics/field/sublevelTransitions.js";
+import {
+  fitSpinOrbit,
+  linearPatternLimit,
+  solveFineStructure,
+  type FineStructureTerm,
+} from "../physics/field/fineStructure.js";
+import {
+  lineComponentsAtField,
+  lsReducedElement,
+  singleReducedElement,
+  statesFromFineStructure,
+  statesFromHyperfine,
+  type LineState,
+  type ReducedElement,
+} from "../physics/field/lineAtField.js";
+import { hyperfineLinePattern } from "../physics/hyperfineLines.js";
+import { formatDoubled, mValues } from "../physics/quantum.js";
+import type { LevelResult, LineResult, SpeciesResult } from "./types.js";
+import type {
+  ConfiguredField,
+  LevelFieldResult,
+  LineAtFieldResult,
+  LineComponentAtField,
+  LineFieldResult,
+  Regime,
+  TermFieldResult,
+} from "./fieldTypes.js";
+
+/** Components weaker than this share of the line are not listed (numerical zeros of mixed states). */
+const NEGLIGIBLE = new Dec("1e-20");
+/** Samples per plot axis. */
+const PLOT_POINTS = 25;
+
+export interface SpeciesFieldResult {
+  levels: Map<string, LevelFieldResult>;
+  terms: TermFieldResult[];
+  /** Term key of each level that belongs to a treated fine-structure term. */
+  termOf: Map<string, TermFieldResult>;
+  lines: Map<string, LineFieldResult>;
+}
+
+/** The solver's view of a level; gJ = 0 stands in for J = 0 (no magnetic moment). */
+export function solverLevel(s: SpeciesResult, l: LevelResult, c: ConstantsEdition): HyperfineZeemanLevel {
+  const hasHf = s.I2 > 0 && l.input.hyperfine !== null;
+  return {
+    J2: l.J2,
+    I2: hasHf ? s.I2 : 0,
+    gJ: l.gJ ?? ZERO,
+    gI: s.gI ?? ZERO,
+    A: hasHf ? l.input.hyperfine!.A.si : ZERO,
+    B: hasHf && l.input.hyperfine!.B ? l.input.hyperfine!.B.si : ZERO,
+    muB_h: val(c.muB_h),
+  };
+}
+
+function plotGrid(fields: ConfiguredField[]): { linear: Dec[]; log: Dec[] } | null {
+  const positive = fields.map((f) => f.tesla).filter((t) => t.gt(0));
+  if (positive.length === 0) return null;
+  const max = Dec.max(...positive);
+  const linear = Array.from({ length: PLOT_POINTS }, (_, i) => max.mul(i).div(PLOT_POINTS - 1));
+  const lo = Dec.max(Dec.min(...positive).div(10), max.div("1e6"));
+  const ratio = max.div(lo).pow(new Dec(1).div(PLOT_POINTS - 1));
+  const log = Array.from({ length: PLOT_POINTS }, (_, i) => (i === PLOT_POINTS - 1 ? max : lo.mul(ratio.pow(i))));
+  return { linear, log };
+}
+
+function levelFields(s: SpeciesResult, l: LevelResult, c: ConstantsEdition, fields: ConfiguredField[]): LevelFieldResult {
+  const level = solverLevel(s, l, c);
+  const solve = hyperfineZeemanSolver(level);
+  const perField = fields.map((f) => solve(f.tesla));
+  const hasHf = level.I2 > 0;
+  const first = perField[0] ?? solve(ZERO);
+  const rows = first.map((st, i) => ({
+    F2: st.F2,
+    mF2: st.mF2,
+    highField: st.highField,
+    energies: perField.map((states) => states[i]!.energy),
+    quadraticPerTesla2: hasHf ? quadraticZeemanCoefficient(level, st.F2, st.mF2) : null,
+  }));
+  const grid = hasHf ? plotGrid(fields) : null;
+  const sample = (bs: Dec[]) => {
+    const solved = bs.map((b) => solve(b));
+    return { fields: bs, energies: rows.map((_, i) => solved.map((states) => states[i]!.energy)) };
+  };
+  return {
+    rows,
+    statesAtFields: perField,
+    validity: hasHf ? linearValidity(level) : null,
+    transitions: hasHf ? sublevelTransitions(level, fields.map((f) => f.tesla)) : [],
+    plot: grid ? { linear: sample(grid.linear), log: sample(grid.log) } : null,
+  };
+}
+
+/** Group levels into LS terms whose every J is listed with an energy. */
+function fineStructureTerms(s: SpeciesResult, c: ConstantsEdition, fields: ConfiguredField[]): TermFieldResult[] {
+  const groups = new Map<string, LevelResult[]>();
+  for (const l of s.levels) {
+    if (!l.input.energy) continue;
+    const t = l.input.term;
+    const key = `${l.input.config} ${t.multiplicity}${t.letter}${t.parity ? "°" : ""}`;
+    groups.set(key, [...(groups.get(key) ?? []), l]);
+  }
+  const out: TermFieldResult[] = [];
+  for (const [key, levels] of groups) {
+    if (levels.length < 2) continue;
+    const { S2, L } = levels[0]!.input.term;
+    const expected = new Set<number>();
+    for (let j2 = Math.abs(2 * L - S2); j2 <= 2 * L + S2; j2 += 2) expected.add(j2);
+    const have = new Set(levels.map((l) => l.J2));
+    if (have.size !== levels.length || have.size !== expected.size || ![...expected].every((j) => have.has(j))) continue;
+    const term: FineStructureTerm = {
+      S2,
+      L,
+      partners: levels.map((l) => ({ J2: l.J2, energy: l.input.energy!.si })),
+      gL: s.gL,
+      gS: s.gS,
+      muB_h: val(c.muB_h),
+    };
+    const energies = levels.map((l) => l.input.energy!.si).sort((a, b) => a.cmp(b));
+    let interval = ZERO;
+    for (let i = 1; i < energies.length; i++) interval = Dec.max(interval, energies[i]!.sub(energies[i - 1]!));
+    out.push({
+      key,
+      config: levels[0]!.input.config,
+      levelIds: levels.map((l) => l.input.id),
+      S2,
+      L,
+      fit: fitSpinOrbit(term),
+      limit: linearPatternLimit(term),
+      atFields: fields.map((f) => solveFineStructure(term, f.tesla)),
+      paschenBackTesla: interval.isZero() ? null : interval.div(val(c.muB_h)),
+    });
+  }
+  return out;
+}
+
+const RANK: Regime[] = ["zero field", "linear Zeeman", "intermediate", "Paschen–Back"];
+
+/** Regime of one level at one field, from the limits computed for it. */
+export function levelRegime(tesla: Dec, linearUpTo: Dec | null, paschenBack: Dec | null): Regime {
+  if (tesla.isZero()) return "zero field";
+  if (linearUpTo === null || tesla.lte(linearUpTo)) return "linear Zeeman";
+  if (paschenBack !== null && tesla.gte(paschenBack.mul(10))) return "Paschen–Back";
+  return "intermediate";
+}
+
+function stronger(a: Regime, b: Regime): Regime {
+  return RANK.indexOf(a) >= RANK.indexOf(b) ? a : b;
+}
+
+/** States of a level without mixing: |J mJ⟩ with the linear energy, for the lower level of a fine-structure-mixed line. */
+function isolatedStates(l: LevelResult, tesla: Dec, muB_h: Dec): LineState[] {
+  return mValues(l.J2).map((m2) => ({
+    label: `J=${formatDoubled(l.J2)}, mJ=${formatDoubled(m2)}`,
+    M2: m2,
+    energy: (l.gJ ?? ZERO).mul(muB_h).mul(tesla).mul(m2).div(2),
+    amplitudes: [{ J2: l.J2, mJ2: m2, mI2: 0, amplitude: new Dec(1) }],
+  }));
+}
+
+function componentsOf(upper: LineState[], lower: LineState[], k: number, reduced: ReducedElement): LineComponentAtField[] {
+  return lineComponentsAtField(upper, lower, k, reduced)
+    .filter((x) => x.strength.gt(NEGLIGIBLE))
+    .map((x) => ({
+      upperLabel: upper[x.upper]!.label,
+      lowerLabel: lower[x.lower]!.label,
+      q: x.q,
+      polarization: x.polarization,
+      strength: x.strength,
+      shiftHz: x.shift,
+    }))
+    .sort((a, b) => a.shiftHz.cmp(b.shiftHz) || b.q - a.q);
+}
+
+export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: ConfiguredField[]): SpeciesFieldResult {
+  const muB_h = val(c.muB_h);
+  const levels = new Map(s.levels.map((l) => [l.input.id, levelFields(s, l, c, fields)]));
+  const terms = fineStructureTerms(s, c, fields);
+  const termOf = new Map<string, TermFieldResult>();
+  for (const t of terms) for (const id of t.levelIds) termOf.set(id, t);
+
+  const regimeOf = (l: LevelResult, tesla: Dec): { hf: Regime; fs: Regime } => {
+    const v = levels.get(l.input.id)!.validity;
+    const t = termOf.get(l.input.id);
+    return {
+      hf: v ? levelRegime(tesla, v.relative.tesla, v.paschenBackTesla) : tesla.isZero() ? "zero field" : "linear Zeeman",
+      fs: t ? levelRegime(tesla, t.limit?.tesla ?? null, t.paschenBackTesla) : tesla.isZero() ? "zero field" : "linear Zeeman",
+    };
+  };
+
+  const lineResult = (ln: LineResult): LineFieldResult => {
+    const u = ln.upper;
+    const l = ln.lower;
+    const hfBoth = s.I2 > 0 && u.input.hyperfine !== null && l.input.hyperfine !== null;
+    const atFields = fields.map((f): LineAtFieldResult => {
+      const ru = regimeOf(u, f.tesla);
+      const rl = regimeOf(l, f.tesla);
+      const beyondLinear = (r: Regime) => r === "intermediate" || r === "Paschen–Back";
+      const fsMatters = beyondLinear(ru.fs) || beyondLinear(rl.fs);
+      const tu = termOf.get(u.input.id);
+      const tl = termOf.get(l.input.id);
+      const sameS = u.input.term.S2 === l.input.term.S2;
+      const regime = stronger(stronger(ru.hf, rl.hf), stronger(ru.fs, rl.fs));
+      if (fsMatters && (tu || tl) && sameS && ln.input.multipole !== "M1") {
+        const statesOf = (lv: LevelResult, t: TermFieldResult | undefined) => {
+          if (!t) return isolatedStates(lv, f.tesla, muB_h);
+          const all = t.atFields[fields.indexOf(f)]!.filter((st) => st.J2 === lv.J2);
+          return statesFromFineStructure(all, lv.input.energy!.si);
+        };
+        const reduced = lsReducedElement(u.input.term.L, l.input.term.L, u.input.term.S2, ln.k);
+        return {
+          field: f,
+          regime,
+          model: "fine-structure Paschen–Back eigenstates",
+          components: componentsOf(statesOf(u, tu), statesOf(l, tl), ln.k, reduced),
+        };
+      }
+      if (hfBoth) {
+        const at = fields.indexOf(f);
+        const su = levels.get(u.input.id)!.statesAtFields[at]!;
+        const sl = levels.get(l.input.id)!.statesAtFields[at]!;
+        return {
+          field: f,
+          regime,
+          model: "hyperfine–Zeeman eigenstates",
+          components: componentsOf(statesFromHyperfine(u.J2, su), statesFromHyperfine(l.J2, sl), ln.k, singleReducedElement),
+        };
+      }
+      return {
+        field: f,
+        regime,
+        model: "J-resolved linear pattern",
+        components: ln.components.map((x) => ({
+          upperLabel: `mJ=${formatDoubled(x.mu2)}`,
+          lowerLabel: `mJ=${formatDoubled(x.ml2)}`,
+          q: x.deltaM,
+          polarization: x.polarization,
+          strength: x.strength.toDecimal(),
+          shiftHz: x.shiftHzPerT.mul(f.tesla),
+        })),
+      };
+    });
+    const hyperfine = hfBoth
+      ? hyperfineLinePattern({
+          I2: s.I2,
+          gI: s.gI!,
+          upper: { J2: u.J2, gJ: u.gJ ?? ZERO, A: u.input.hyperfine!.A.si, B: u.input.hyperfine!.B?.si ?? ZERO },
+          lower: { J2: l.J2, gJ: l.gJ ?? ZERO, A: l.input.hyperfine!.A.si, B: l.input.hyperfine!.B?.si ?? ZERO },
+          k: ln.k,
+          muB_h,
+        })
+      : null;
+    return { atFields, hyperfine };
+  };
+
+  return { levels, terms, termOf, lines: new Map(s.lines.map((ln) => [ln.input.id, lineResult(ln)])) };
+}

@@ -1,0 +1,84 @@
+/**
+ * Field-dependent results: exact energies at the configured bias fields,
+ * the worth of the linear numbers, sublevel transitions, fine-structure
+ * Paschen–Back terms and line components at each field.
+ */
+import type { Dec } from "../physics/decimal.js";
+import type { LinearValidity } from "../physics/field/validity.js";
+import type { SublevelTransition } from "../physics/field/sublevelTransitions.js";
+import type { FineStructureState, LinearLimit, SpinOrbitFit } from "../physics/field/fineStructure.js";
+import type { HyperfineLineGroup } from "../physics/hyperfineLines.js";
+import type { Polarization } from "../physics/linePattern.js";
+import type { FieldState } from "../physics/field/hyperfineZeeman.js";
+
+export interface ConfiguredField {
+  text: string;
+  tesla: Dec;
+}
+
+/** One sublevel across all configured fields. */
+export interface FieldRow {
+  F2: number;
+  mF2: number;
+  /** The uncoupled state it tends to at high field (mI2 = 0 without nuclear spin). */
+  highField: { mJ2: number; mI2: number };
+  /** Energy E/h (Hz) from the hyperfine-free level centre, one per configured field. */
+  energies: Dec[];
+  /** Second-order coefficient (Hz/T²); null when perturbation theory fails or there is no hyperfine structure. */
+  quadraticPerTesla2: Dec | null;
+}
+
+export interface LevelFieldResult {
+  rows: FieldRow[];
+  /** The solver's states at each configured field (reused by the line calculations). */
+  statesAtFields: FieldState[][];
+  /** Null for a level without hyperfine structure. */
+  validity: LinearValidity | null;
+  transitions: SublevelTransition[];
+  /** Energies for the plots: sample fields (T) and one energy list per row. */
+  plot: { linear: { fields: Dec[]; energies: Dec[][] }; log: { fields: Dec[]; energies: Dec[][] } } | null;
+}
+
+/** The fine-structure partners of one LS term treated together (Paschen–Back). */
+export interface TermFieldResult {
+  /** Key: configuration and term without J, e.g. "3p 2P°". */
+  key: string;
+  config: string;
+  levelIds: string[];
+  S2: number;
+  L: number;
+  fit: SpinOrbitFit;
+  /** First field where the J-resolved linear pattern is off by more than 1 %. */
+  limit: LinearLimit | null;
+  /** States at each configured field. */
+  atFields: FineStructureState[][];
+  /** Field scale of the fine-structure Paschen–Back regime: largest interval / (μB/h). */
+  paschenBackTesla: Dec | null;
+}
+
+export type Regime = "zero field" | "linear Zeeman" | "intermediate" | "Paschen–Back";
+
+export interface LineComponentAtField {
+  upperLabel: string;
+  lowerLabel: string;
+  q: number;
+  polarization: Polarization;
+  /** Relative strength, sums to 1 over the line at this field. */
+  strength: Dec;
+  /** Frequency offset from the zero-field line centre (hyperfine-free), Hz. */
+  shiftHz: Dec;
+}
+
+export interface LineAtFieldResult {
+  field: ConfiguredField;
+  regime: Regime;
+  /** Which states the components come from. */
+  model: "hyperfine–Zeeman eigenstates" | "fine-structure Paschen–Back eigenstates" | "J-resolved linear pattern";
+  components: LineComponentAtField[];
+}
+
+export interface LineFieldResult {
+  atFields: LineAtFieldResult[];
+  /** Weak-field hyperfine-resolved pattern (both levels with hyperfine structure), else null. */
+  hyperfine: HyperfineLineGroup[] | null;
+}
