@@ -143,14 +143,19 @@ export function fieldPlotSvg(input: FieldPlotInput, axis: FieldAxis): string {
   parts.push(
     `<text class="axis-label" x="18" y="${px((y0 + y1) / 2)}" text-anchor="middle" transform="rotate(-90 18 ${px((y0 + y1) / 2)})">${esc(`Energy E/h (${eu.unit})`)}</text>`,
   );
-  // rules
+  // rules; labels that would run into the previous one in their row drop to the next row
+  const rowEnds: number[] = [];
   for (const r of input.rules ?? []) {
     const b = toNumber(r.tesla);
     if (axis === "log" && b <= 0) continue;
     if (b < bLo || b > bMax) continue;
     const x = X(b);
+    const width = 6 * r.label.length + 6; // about 6 px a character at font-size 10
+    let row = rowEnds.findIndex((end) => end <= x);
+    if (row < 0) row = rowEnds.length;
+    rowEnds[row] = x + width;
     parts.push(`<line class="rule" x1="${px(x)}" y1="${y1}" x2="${px(x)}" y2="${y0}" stroke="#000" stroke-width="1" stroke-dasharray="1 2"/>`);
-    parts.push(`<text class="rule-label" x="${px(x + 3)}" y="${y1 + 12}" font-size="10">${esc(r.label)}</text>`);
+    parts.push(`<text class="rule-label" x="${px(x + 3)}" y="${y1 + 12 + 12 * row}" font-size="10">${esc(r.label)}</text>`);
   }
   // curves
   const ends: number[] = [];
