@@ -203,7 +203,27 @@
       return { rows: rows.slice(0, limit || 25), total: rows.length, capped: rows.length >= cap };
     }
 
-    return { search: search };
+    /** Every row the finder can reach (for tests: each must be a row of its page). */
+    function all() {
+      var rows = [];
+      data.species.forEach(function (s) { rows.push({ kind: "species", href: s[2], label: s[1] }); });
+      data.levels.forEach(function (l) {
+        levelRows(l, {}, rows);
+        mValues(l[5]).forEach(function (m2) { levelRows(l, { mj: m2 }, rows); });
+        l[6].forEach(function (F2) {
+          levelRows(l, { f: F2 }, rows);
+          mValues(F2).forEach(function (m2) { levelRows(l, { f: F2, mf: m2 }, rows); });
+        });
+      });
+      data.lines.forEach(function (n) {
+        lineRows(n, {}, rows);
+        var c = n[7];
+        for (var k = 0; k + 1 < c.length; k += 2) lineRows(n, { mu: c[k], ml: c[k + 1] }, rows);
+      });
+      return rows;
+    }
+
+    return { search: search, all: all };
   }
 
   root.AtlasFinder = { searchTokens: searchTokens, parseQuery: parseQuery, createFinder: createFinder, termText: termText };

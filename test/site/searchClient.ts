@@ -1,0 +1,42 @@
+/**
+ * The browser scripts of templates/assets evaluated in a node:vm context, as
+ * classic scripts see them (one shared global), for tests without a browser.
+ */
+import { readFileSync } from "node:fs";
+import { join } from "node:path";
+import vm from "node:vm";
+import { ROOT } from "../support/runBuild.js";
+
+export interface FinderRow {
+  kind: string;
+  href: string;
+  label: string;
+}
+
+export interface ClientGlobal {
+  MiniSearch: unknown;
+  AtlasSearchData: unknown;
+  AtlasFinder: {
+    searchTokens(text: string): string[];
+    parseQuery(text: string): { words: string[]; qn: Record<string, number>; hasQn: boolean };
+    createFinder(data: unknown, miniSearch: unknown): {
+      search(text: string, limit?: number): { rows: FinderRow[]; total: number; capped?: boolean };
+      all(): FinderRow[];
+    };
+  };
+  AtlasUnits: { convert(hzPerT: string, unit: string): { sign: string; int: string; frac: string; exp: string } | null; UNITS: string[] };
+  AtlasTables: {
+    decimalKey(s: string): unknown;
+    compareDecimal(a: unknown, b: unknown): number;
+  };
+}
+
+/** Run the given scripts (paths, or { code }) in order in one fresh context. */
+export function clientContext(scripts: (string | { code: string })[]): ClientGlobal {
+  const ctx = vm.createContext({});
+  for (const s of scripts) vm.runInContext(typeof s === "string" ? readFileSync(s, "utf8") : s.code, ctx, typeof s === "string" ? { filename: s } : {});
+  return ctx as unknown as ClientGlobal;
+}
+
+export const ASSET = (name: string) => join(ROOT, "templates/assets", name);
+export const MINISEARCH = join(ROOT, "node_modules/minisearch/dist/umd/index.js");
