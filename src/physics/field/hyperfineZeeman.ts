@@ -180,8 +180,14 @@ function blockStructures(I2: number, J2: number): BlockStructure[] {
   return blocks;
 }
 
-interface PreparedBlock {
-  structure: BlockStructure;
+/**
+ * Field-independent data of one M block, in Dec and in float64 (the float
+ * copy feeds the float twin, hyperfineZeemanFloat.ts, and seeds the Dec
+ * eigen-solver). Shared by the field modules; not a result.
+ */
+export interface PreparedBlock {
+  M2: number;
+  basis: UncoupledState[];
   /** Field-free part A·I·J + B·Q. */
   hyperfine: Dec[][];
   /** gJ·mJ + gI·mI per basis state. */
@@ -190,24 +196,36 @@ interface PreparedBlock {
   fByRank: number[];
   /** Basis indices in ascending high-field energy. */
   highByRank: number[];
+  /** Position of the block's k-th lowest state in the solver's (F, mF) output order. */
+  outIndex: number[];
+  /** Non-zero columns of each row of `hyperfine` (the matrix is banded). */
+  nonZero: number[][];
+  floatHyperfine: number[][];
+  floatZeeman: number[];
 }
 
-/** A prepared solver for one level: call it with fields in tesla (B ≥ 0). */
-export type HyperfineZeemanSolver = (tesla: Dec) => FieldState[];
+/** The prepared problem of one level: its blocks and μB/h in both number types. */
+export interface PreparedLevel {
+  blocks: PreparedBlock[];
+  /** Number of sublevels, (2I+1)(2J+1). */
+  size: number;
+  muB_h: Dec;
+  floatMuB_h: number;
+}
 
 /**
- * Prepare the field-independent parts of the problem once (matrix structure,
- * labels) and return a function of the field. Same results as
- * solveHyperfineZeeman; use it when one level is solved at many fields.
+ * Build the field-independent parts of the problem of one level (matrix
+ * structure, labels, output order). Used by hyperfineZeemanSolver and by the
+ * float twin; exact like the solver's inputs (Dec products of the constants).
  */
-export function hyperfineZeemanSolver(level: HyperfineZeemanLevel): HyperfineZeemanSolver {
+export function prepareHyperfineZeeman(level: HyperfineZeemanLevel): PreparedLevel {
   const { I2, J2, gJ, gI, A, muB_h } = level;
   if (!Number.isInteger(I2) || !Number.isInteger(J2) || I2 < 0 || J2 < 0) throw new RangeError("I2 and J2 must be doubled non-negative integers");
   const B = I2 >= 2 && J2 >= 2 ? level.B : ZERO;
   const zeroField = new Map<number, Dec>();
   for (const F2 of fValues(I2, J2)) zeroField.set(F2, hyperfineShift(A, B, I2, J2, F2));
   const fOrder = [...zeroField.keys()].sort((f, g) => zeroField.get(f)!.cmp(zeroField.get(g)!) || f - g);
-  const prepared: PreparedBlock[] = blockStructures(I2, J2).map((structure) => {
+  const blocks: PreparedBlock[] = blockStructures(I2, J2).map((structure) => {
     const n = structure.basis.length;
     const hyperfine = structure.dipole.map((row, i) =>
       row.map((x, j) => {
@@ -223,33 +241,84 @@ export function hyperfineZeemanSolver(level: HyperfineZeemanLevel): HyperfineZee
     );
     const fByRank = fOrder.filter((F2) => F2 >= Math.abs(structure.M2));
     if (fByRank.length !== n) throw new Error("internal: block size does not match the number of F levels");
-    return { structure, hyperfine, zeeman, fByRank, highByRank };
+    return {
+      M2: structure.M2,
+      basis: structure.basis,
+      hyperfine,
+      zeeman,
+      fByRank,
+      highByRank,
+      outIndex: [],
+      nonZero: hyperfine.map((row) => [...row.keys()].filter((k) => !row[k]!.isZero())),
+      floatHyperfine: hyperfine.map((row) => row.map((x) => x.toNumber())),
+      floatZeeman: zeeman.map((x) => x.toNumber()),
+    };
   });
+  // output order: F, then mF (doubled values ascending)
+  const slots = blocks.flatMap((b, bi) => b.fByRank.map((F2, k) => ({ bi, k, F2, M2: b.M2 })));
+  slots.sort((x, y) => x.F2 - y.F2 || x.M2 - y.M2);
+  slots.forEach(({ bi, k }, pos) => (blocks[bi]!.outIndex[k] = pos));
+  return { blocks, size: slots.length, muB_h, floatMuB_h: muB_h.toNumber() };
+}
+
+/** The block's Hamiltonian at Zeeman scale (μB/h)·B, in Dec; off-diagonal rows are shared, not copied. */
+export function blockMatrix(block: PreparedBlock, scale: Dec): Dec[][] {
+  return block.hyperfine.map((row, i) => {
+    const r = row.slice();
+    r[i] = row[i]!.plus(scale.mul(block.zeeman[i]!));
+    return r;
+  });
+}
+
+/** The same in float64 for field `tesla` (a float, only for seeding and scanning). */
+export function blockMatrixFloat(block: PreparedBlock, floatScale: number): number[][] {
+  return block.floatHyperfine.map((row, i) => {
+    const r = row.slice();
+    r[i] = row[i]! + floatScale * block.floatZeeman[i]!;
+    return r;
+  });
+}
+
+/** A prepared solver for one level: call it with fields in tesla (B ≥ 0). */
+export type HyperfineZeemanSolver = (tesla: Dec) => FieldState[];
+
+/**
+ * Prepare the field-independent parts of the problem once (matrix structure,
+ * labels) and return a function of the field. Same results as
+ * solveHyperfineZeeman; use it when one level is solved at many fields.
+ */
+export function hyperfineZeemanSolver(level: HyperfineZeemanLevel): HyperfineZeemanSolver {
+  return solverForPrepared(prepareHyperfineZeeman(level));
+}
+
+/** hyperfineZeemanSolver for a level already prepared (shares the preparation with the float twin). */
+export function solverForPrepared(prepared: PreparedLevel): HyperfineZeemanSolver {
+  const { muB_h } = prepared;
   return (tesla: Dec): FieldState[] => {
     if (tesla.isNegative()) throw new RangeError("field must be ≥ 0 T (the direction defines the quantization axis)");
     const scale = muB_h.mul(tesla);
-    const out: FieldState[] = [];
-    for (const block of prepared) {
-      const { structure, hyperfine, zeeman } = block;
-      const n = structure.basis.length;
-      const h = hyperfine.map((row, i) => row.map((x, j) => (i === j ? x.plus(scale.mul(zeeman[i]!)) : x)));
-      const eig = symmetricEigen(h);
+    const floatScale = prepared.floatMuB_h * tesla.toNumber();
+    const out: FieldState[] = new Array(prepared.size);
+    for (const block of prepared.blocks) {
+      const { basis, zeeman } = block;
+      const n = basis.length;
+      const eig = symmetricEigen(blockMatrix(block, scale), n > 2 ? blockMatrixFloat(block, floatScale) : undefined);
       for (let k = 0; k < n; k++) {
         const vector = fixSign(eig.vectors[k]!);
         let slope = ZERO;
-        for (let i = 0; i < n; i++) slope = slope.plus(vector[i]!.mul(vector[i]!).mul(zeeman[i]!));
-        out.push({
+        for (let i = 0; i < n; i++) if (!vector[i]!.isZero()) slope = slope.plus(vector[i]!.mul(vector[i]!).mul(zeeman[i]!));
+        out[block.outIndex[k]!] = {
           F2: block.fByRank[k]!,
-          mF2: structure.M2,
+          mF2: block.M2,
           energy: eig.values[k]!,
-          basis: structure.basis,
+          basis,
           vector,
-          highField: structure.basis[block.highByRank[k]!]!,
+          highField: basis[block.highByRank[k]!]!,
           slope: slope.mul(muB_h),
-        });
+        };
       }
     }
-    return out.sort((s, t) => s.F2 - t.F2 || s.mF2 - t.mF2);
+    return out;
   };
 }
 

@@ -34,7 +34,9 @@
  */
 import { Dec, ZERO } from "../decimal.js";
 import { fValues, gF, hyperfineShift } from "../hyperfine.js";
-import { hyperfineZeemanSolver, type FieldState, type HyperfineZeemanLevel } from "./hyperfineZeeman.js";
+import { prepareHyperfineZeeman, solverForPrepared, type FieldState, type HyperfineZeemanLevel, type PreparedBlock, type PreparedLevel } from "./hyperfineZeeman.js";
+import { curvatureFloat, hyperfineZeemanFloatSolver, solveBlockFloat, type FloatBlockSolution } from "./hyperfineZeemanFloat.js";
+import { refineSublevel, type RefinedSublevel } from "./floatSeededSublevel.js";
 import { quadraticZeemanCoefficient } from "./quadraticZeeman.js";
 
 export interface SublevelLabel {
@@ -76,6 +78,11 @@ const GAUSS = new Dec("1e-4");
 const GAUSS2 = new Dec("1e-8");
 const REL_TOL = new Dec("1e-25");
 
+interface Slot {
+  block: PreparedBlock;
+  rank: number;
+}
+
 interface Pair {
   lo: number;
   up: number;
@@ -86,7 +93,11 @@ interface Pair {
 export function sublevelTransitions(level: HyperfineZeemanLevel, fields: readonly Dec[], options: TransitionOptions = {}): SublevelTransition[] {
   const { I2, J2 } = level;
   const Bq = I2 >= 2 && J2 >= 2 ? level.B : ZERO;
-  const solve = hyperfineZeemanSolver(level);
+  const prepared = prepareHyperfineZeeman(level);
+  const solve = solverForPrepared(prepared);
+  // block and rank of each sublevel, indexed like `labels`
+  const where: Slot[] = new Array(prepared.size);
+  for (const b of prepared.blocks) b.outIndex.forEach((pos, rank) => (where[pos] = { block: b, rank }));
   const labels: SublevelLabel[] = [];
   for (const F2 of fValues(I2, J2)) for (let mF2 = -F2; mF2 <= F2; mF2 += 2) labels.push({ F2, mF2 });
   const e0 = labels.map((s) => hyperfineShift(level.A, Bq, I2, J2, s.F2));
@@ -111,29 +122,32 @@ export function sublevelTransitions(level: HyperfineZeemanLevel, fields: readonl
       pairs.push({ lo, up, kind });
     }
   }
-  // states come back from the solver in the same (F, mF) order as `labels`
-  const freq = (s: FieldState[], p: Pair) => s[p.up]!.energy.minus(s[p.lo]!.energy);
-  const deriv = (s: FieldState[], p: Pair) => s[p.up]!.slope.minus(s[p.lo]!.slope);
+  // states come back from the solvers in the same (F, mF) order as `labels`
   const atFields = fields.map((b) => ({ tesla: b, states: solve(b) }));
 
-  // field-insensitive points: grid scan shared by all lines, then refinement per bracket
+  // field-insensitive points: float64 grid scan shared by all lines, float bracketing, Dec refinement per root
   const from = options.fromTesla ?? new Dec("1e-8");
   const to = options.toTesla ?? new Dec("1");
   const perDecade = options.pointsPerDecade ?? 20;
-  const ratio = new Dec(10).pow(new Dec(1).div(perDecade));
-  const grid: { b: Dec; d: Dec[] }[] = [];
-  for (let b = from; b.lte(to); b = b.mul(ratio)) {
-    const s = solve(b);
-    grid.push({ b, d: pairs.map((p) => deriv(s, p)) });
-  }
+  const fromF = from.toNumber();
+  const steps = Math.floor(Math.log10(to.toNumber() / fromF) * perDecade + 1e-9);
+  const gridB = Array.from({ length: steps + 1 }, (_, g) => fromF * 10 ** (g / perDecade));
+  const fsolve = hyperfineZeemanFloatSolver(prepared);
+  const grid = gridB.map((b) => {
+    const st = fsolve(b);
+    return pairs.map((p) => st.slope[p.up]! - st.slope[p.lo]!);
+  });
+  // sign changes smaller than float64 can tell from zero are noise, not roots
+  let gMax = 0;
+  for (const b of prepared.blocks) for (const zf of b.floatZeeman) gMax = Math.max(gMax, Math.abs(zf));
+  const noise = 1e-12 * prepared.floatMuB_h * gMax;
   const roots: FieldInsensitivePoint[][] = pairs.map((p, k) => {
     const found: FieldInsensitivePoint[] = [];
     for (let g = 1; g < grid.length; g++) {
-      const d0 = grid[g - 1]!.d[k]!;
-      const d1 = grid[g]!.d[k]!;
-      if (d0.isZero() || d0.isNegative() === d1.isNegative() || d1.isZero()) continue;
-      const b = illinois((x) => deriv(solve(x), p), grid[g - 1]!.b, d0, grid[g]!.b, d1);
-      found.push({ tesla: b, hz: freq(solve(b), p) });
+      const d0 = grid[g - 1]![k]!;
+      const d1 = grid[g]![k]!;
+      if (d0 === 0 || d1 === 0 || d0 < 0 === d1 < 0 || Math.max(Math.abs(d0), Math.abs(d1)) <= noise) continue;
+      found.push(refineRoot(prepared, where[p.up]!, where[p.lo]!, gridB[g - 1]!, d0, gridB[g]!, d1, (x) => solve(x), p));
     }
     return found;
   });
@@ -156,6 +170,74 @@ export function sublevelTransitions(level: HyperfineZeemanLevel, fields: readonl
     };
   });
 }
+
+/**
+ * The field-insensitive point of one line between grid fields a < b where
+ * df/dB (float64 values da, db) changes sign. First in float64: safeguarded
+ * Newton (bisection when a step leaves the bracket) with the analytic
+ * curvature, to float resolution. Then in Dec: Newton steps with Dec df/dB
+ * from refineSublevel and the float curvature, until a step is below
+ * REL_TOL·B; converging from a float root good to ~1e-13 this takes two Dec
+ * evaluations. Should that fail (no convergence in MAX_DEC_STEPS, a step
+ * leaving the bracket, a float gap of zero), Illinois on the full Dec solve
+ * takes over. The frequency is f at the last evaluation plus the half-step
+ * Taylor correction f′·Δ/2, the value at the root to O(f″·Δ²).
+ */
+function refineRoot(
+  prepared: PreparedLevel, up: Slot, lo: Slot, a: number, da: number, b: number, db: number,
+  solve: (x: Dec) => FieldState[], p: Pair,
+): FieldInsensitivePoint {
+  const floatAt = (x: number) => {
+    const su = solveBlockFloat(prepared, up.block, x);
+    const sl = up.block === lo.block ? su : solveBlockFloat(prepared, lo.block, x);
+    return { su, sl };
+  };
+  const curvature = (su: FloatBlockSolution, sl: FloatBlockSolution) =>
+    curvatureFloat(prepared, up.block, su, up.rank) - curvatureFloat(prepared, lo.block, sl, lo.rank);
+  // the grid bracket: the float stage narrows a and b to float resolution, which Dec may legitimately step past
+  const lowD = new Dec(a.toPrecision(17));
+  const highD = new Dec(b.toPrecision(17));
+  // float stage
+  let x = a - (da * (b - a)) / (db - da);
+  for (let it = 0; it < 100; it++) {
+    const { su, sl } = floatAt(x);
+    const d = su.slopes[up.rank]! - sl.slopes[lo.rank]!;
+    if (d === 0) break;
+    if (d < 0 === da < 0) { a = x; da = d; } else { b = x; db = d; }
+    let next = x - d / curvature(su, sl);
+    if (!(next > a && next < b)) next = (a + b) / 2;
+    const done = Math.abs(next - x) <= 4e-16 * x || b - a <= 4e-16 * b;
+    x = next;
+    if (done) break;
+  }
+  // Dec stage
+  let B = new Dec(x.toPrecision(17));
+  for (let it = 0; it < MAX_DEC_STEPS; it++) {
+    const bf = B.toNumber();
+    const { su, sl } = floatAt(bf);
+    const scale = prepared.muB_h.mul(B);
+    const u: RefinedSublevel = refineSublevel(prepared, up.block, scale, su, up.rank);
+    const l: RefinedSublevel = refineSublevel(prepared, lo.block, scale, sl, lo.rank);
+    const d = u.slope.minus(l.slope);
+    const stepF = -d.toNumber() / curvature(su, sl);
+    if (!Number.isFinite(stepF)) break;
+    const step = new Dec(stepF.toPrecision(17));
+    const next = B.plus(step);
+    if (next.lt(lowD) || next.gt(highD)) break;
+    if (step.abs().lte(next.abs().mul(REL_TOL))) {
+      return { tesla: next, hz: u.energy.minus(l.energy).plus(d.mul(step).div(2)) };
+    }
+    B = next;
+  }
+  const dA = deriv(solve(lowD), p);
+  const dB = deriv(solve(highD), p);
+  const root = illinois((t) => deriv(solve(t), p), lowD, dA, highD, dB);
+  return { tesla: root, hz: freq(solve(root), p) };
+}
+
+const freq = (s: FieldState[], p: Pair) => s[p.up]!.energy.minus(s[p.lo]!.energy);
+const deriv = (s: FieldState[], p: Pair) => s[p.up]!.slope.minus(s[p.lo]!.slope);
+const MAX_DEC_STEPS = 6;
 
 /** Root of f in [a, b] with f(a), f(b) of opposite sign: Illinois regula falsi to REL_TOL. */
 function illinois(f: (x: Dec) => Dec, a: Dec, fa: Dec, b: Dec, fb: Dec): Dec {

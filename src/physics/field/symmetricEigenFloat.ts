@@ -24,47 +24,67 @@ export interface SymmetricEigenFloat {
 export function symmetricEigenFloat(m: readonly (readonly number[])[]): SymmetricEigenFloat {
   const n = m.length;
   if (n === 1) return { values: [m[0]![0]!], vectors: [[1]] };
-  const a = m.map((r) => r.slice());
-  const v: number[][] = a.map((_, i) => a.map((__, j) => (i === j ? 1 : 0)));
+  // flat row-major working copies: a (matrix), v (eigenvector columns)
+  const a = new Float64Array(n * n);
+  const v = new Float64Array(n * n);
+  for (let i = 0; i < n; i++) {
+    const row = m[i]!;
+    for (let j = 0; j < n; j++) a[i * n + j] = row[j]!;
+    v[i * n + i] = 1;
+  }
   for (let sweep = 0; sweep < 100; sweep++) {
     let off = 0;
     let norm = 0;
-    for (let i = 0; i < n; i++) {
-      for (let j = 0; j < n; j++) {
-        const x = a[i]![j]! * a[i]![j]!;
-        norm += x;
-        if (i !== j) off += x;
-      }
-    }
-    // off-diagonal below ~1e-17 of the norm: float64 cannot do better
-    if (off <= 1e-34 * norm || off === 0) break;
+    for (let i = 0; i < n * n; i++) norm += a[i]! * a[i]!;
+    for (let p = 0; p < n - 1; p++) for (let q = p + 1; q < n; q++) off += 2 * a[p * n + q]! * a[p * n + q]!;
+    // off-diagonal below ~1e-18 of the norm, or all dropped as noise
+    if (off <= 1e-36 * norm || off === 0) break;
     for (let p = 0; p < n - 1; p++) {
       for (let q = p + 1; q < n; q++) {
-        const apq = a[p]![q]!;
+        const apq = a[p * n + q]!;
         if (apq === 0) continue;
-        const theta = (a[q]![q]! - a[p]![p]!) / (2 * apq);
+        const app = a[p * n + p]!;
+        const aqq = a[q * n + q]!;
+        // after three sweeps, an element below the rounding of both diagonals is rounding noise:
+        // drop it (W. H. Press et al., §11.1), or the sweeps never end
+        const g = 100 * Math.abs(apq);
+        if (sweep > 2 && Math.abs(app) + g === Math.abs(app) && Math.abs(aqq) + g === Math.abs(aqq)) {
+          a[p * n + q] = 0;
+          a[q * n + p] = 0;
+          continue;
+        }
+        const theta = (aqq - app) / (2 * apq);
         const t = (theta >= 0 ? 1 : -1) / (Math.abs(theta) + Math.sqrt(theta * theta + 1));
         const c = 1 / Math.sqrt(t * t + 1);
         const s = t * c;
-        a[p]![p] = a[p]![p]! - t * apq;
-        a[q]![q] = a[q]![q]! + t * apq;
-        a[p]![q] = 0;
-        a[q]![p] = 0;
+        a[p * n + p] = app - t * apq;
+        a[q * n + q] = aqq + t * apq;
+        a[p * n + q] = 0;
+        a[q * n + p] = 0;
         for (let r = 0; r < n; r++) {
           if (r !== p && r !== q) {
-            const g = a[r]![p]!;
-            const k = a[r]![q]!;
-            a[r]![p] = a[p]![r] = c * g - s * k;
-            a[r]![q] = a[q]![r] = s * g + c * k;
+            const grp = a[r * n + p]!;
+            const grq = a[r * n + q]!;
+            const np = c * grp - s * grq;
+            const nq = s * grp + c * grq;
+            a[r * n + p] = np;
+            a[p * n + r] = np;
+            a[r * n + q] = nq;
+            a[q * n + r] = nq;
           }
-          const g = v[r]![p]!;
-          const k = v[r]![q]!;
-          v[r]![p] = c * g - s * k;
-          v[r]![q] = s * g + c * k;
+          const vp = v[r * n + p]!;
+          const vq = v[r * n + q]!;
+          v[r * n + p] = c * vp - s * vq;
+          v[r * n + q] = s * vp + c * vq;
         }
       }
     }
   }
-  const order = [...Array(n).keys()].sort((i, j) => a[i]![i]! - a[j]![j]! || i - j);
-  return { values: order.map((i) => a[i]![i]!), vectors: order.map((i) => v.map((row) => row[i]!)) };
+  const order = [...Array(n).keys()].sort((i, j) => a[i * n + i]! - a[j * n + j]! || i - j);
+  const vectors = order.map((k) => {
+    const col = new Array<number>(n);
+    for (let r = 0; r < n; r++) col[r] = v[r * n + k]!;
+    return col;
+  });
+  return { values: order.map((i) => a[i * n + i]!), vectors };
 }

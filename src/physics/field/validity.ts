@@ -15,8 +15,15 @@
  * and bisect between it and the sample before (or 0) to 1e-9 relative.
  * A violation that starts and ends between two samples would be missed;
  * the deviations grow smoothly (∝ B² at first), so this is not expected.
- * Exact: the energies are (hyperfineZeeman.ts); the field is found to ~9 digits.
- * `null` means "beyond range": never broken up to maxTesla.
+ * Exact: no, and float-derived. The energies of this search come from the
+ * float64 twin of the solver (hyperfineZeemanFloat.ts), not from the Dec
+ * solver: a validity field is a threshold, not a tabulated value, and
+ * float64 resolves E(B) − E(0) to ~1e-15 of the level's largest |E|
+ * (deviations below 1e-13 of it are not counted as breaking a criterion).
+ * The returned field is the float bisection result rounded to 7 significant
+ * digits (a sample field is returned as given); trust about 6. The tolerances
+ * are used as float64 numbers. `null` means "beyond range": never broken up
+ * to maxTesla. paschenBackTesla is exact-decimal.
  *
  * Paschen–Back field: B_PB = ΔE_max / ((μB/h)·|gJ|), with ΔE_max the largest
  * zero-field splitting between F levels adjacent in energy. For J = 1/2 this
@@ -31,7 +38,8 @@
  */
 import { Dec, ZERO } from "../decimal.js";
 import { fValues, gF, hyperfineShift } from "../hyperfine.js";
-import { hyperfineZeemanSolver, type HyperfineZeemanLevel } from "./hyperfineZeeman.js";
+import { prepareHyperfineZeeman, type HyperfineZeemanLevel, type PreparedLevel } from "./hyperfineZeeman.js";
+import { hyperfineZeemanFloatSolver } from "./hyperfineZeemanFloat.js";
 
 export interface ValidityOptions {
   /** Relative tolerance, default 0.01. */
@@ -85,45 +93,62 @@ export function validitySamples(max: Dec): Dec[] {
   }
 }
 
+/** Doubled (F, mF) of every sublevel in the solvers' output order. */
+function sublevelLabels(prepared: PreparedLevel): { F2: number; mF2: number }[] {
+  const labels: { F2: number; mF2: number }[] = new Array(prepared.size);
+  for (const b of prepared.blocks) b.outIndex.forEach((pos, k) => (labels[pos] = { F2: b.fByRank[k]!, mF2: b.M2 }));
+  return labels;
+}
+
+/** Float64 round-off allowance on E(B) − E(0): deviations below it are not counted as breaking a criterion. */
+const FLOAT_FLOOR = 1e-13;
+
 /** Linear-shift validity fields and Paschen–Back scale of a level. */
 export function linearValidity(level: HyperfineZeemanLevel, options: ValidityOptions = {}): LinearValidity {
-  const rel = options.relative ?? new Dec("0.01");
-  const absHz = options.absoluteHz ?? new Dec("1000");
+  const rel = (options.relative ?? new Dec("0.01")).toNumber();
+  const absHz = (options.absoluteHz ?? new Dec("1000")).toNumber();
   const maxTesla = options.maxTesla ?? new Dec("10");
-  const solve = hyperfineZeemanSolver(level);
-  const zero = solve(ZERO);
-  const slopes = zero.map((s) => {
+  const prepared = prepareHyperfineZeeman(level);
+  const solve = hyperfineZeemanFloatSolver(prepared);
+  const labels = sublevelLabels(prepared);
+  const zero = solve(0);
+  const slopes = labels.map((s) => {
     const g = gF(level.gJ, level.gI, level.I2, level.J2, s.F2);
-    return g === null ? ZERO : level.muB_h.mul(g).mul(s.mF2).div(2);
+    return g === null ? 0 : level.muB_h.mul(g).mul(s.mF2).div(2).toNumber();
   });
+  let zeroMax = 0;
+  for (const e of zero.energy) zeroMax = Math.max(zeroMax, Math.abs(e));
   // index of the first sublevel breaking each criterion at field b, or -1
-  const check = (b: Dec): [number, number] => {
-    const states = solve(b);
+  const check = (b: number): [number, number] => {
+    const { energy } = solve(b);
+    let big = zeroMax;
+    for (const e of energy) big = Math.max(big, Math.abs(e));
+    const floor = FLOAT_FLOOR * big;
     let r = -1;
     let a = -1;
-    states.forEach((s, i) => {
-      const exact = s.energy.minus(zero[i]!.energy);
-      const lin = slopes[i]!.mul(b);
-      const err = lin.minus(exact).abs();
-      if (a < 0 && err.gt(absHz)) a = i;
-      if (r < 0 && !slopes[i]!.isZero() && err.gt(rel.mul(exact.abs()))) r = i;
-    });
+    for (let i = 0; i < energy.length && (r < 0 || a < 0); i++) {
+      const exact = energy[i]! - zero.energy[i]!;
+      const err = Math.abs(slopes[i]! * b - exact) - floor;
+      if (a < 0 && err > absHz) a = i;
+      if (r < 0 && slopes[i] !== 0 && err > rel * Math.abs(exact)) r = i;
+    }
     return [r, a];
   };
+  const samples = validitySamples(maxTesla);
   const limit = (which: 0 | 1): ValidityLimit => {
-    let lo = ZERO;
-    for (const b of validitySamples(maxTesla)) {
+    let lo = 0;
+    for (const sample of samples) {
+      const b = sample.toNumber();
       if (check(b)[which] >= 0) {
         let hi = b;
-        const tol = new Dec("1e-9");
-        while (hi.minus(lo).gt(hi.mul(tol))) {
-          const mid = lo.plus(hi).div(2);
+        while (hi - lo > hi * 1e-9) {
+          const mid = (lo + hi) / 2;
           if (check(mid)[which] >= 0) hi = mid;
           else lo = mid;
         }
-        const i = check(hi)[which];
-        const s = zero[i]!;
-        return { tesla: hi, sublevel: { F2: s.F2, mF2: s.mF2 } };
+        const s = labels[check(hi)[which]]!;
+        const tesla = hi === b ? sample : new Dec(hi.toPrecision(REPORTED_DIGITS));
+        return { tesla, sublevel: { F2: s.F2, mF2: s.mF2 } };
       }
       lo = b;
     }
@@ -131,3 +156,6 @@ export function linearValidity(level: HyperfineZeemanLevel, options: ValidityOpt
   };
   return { relative: limit(0), absolute: limit(1), maxTesla, paschenBackTesla: paschenBackField(level) };
 }
+
+/** Significant digits kept of a float64-bisected validity field (good to about 6). */
+const REPORTED_DIGITS = 7;

@@ -1,0 +1,91 @@
+/**
+ * Float64 twin of the hyperfine–Zeeman solver (hyperfineZeeman.ts): the same
+ * M blocks, labels and (F, mF) output order, diagonalized in float64
+ * (symmetricEigenFloat.ts), returning energies E/h (Hz) and Hellmann–Feynman
+ * slopes dE/dB = (μB/h)·⟨ψ|gJ·Jz + gI·Iz|ψ⟩ (Hz/T) as JavaScript numbers.
+ *
+ * It exists for speed: validity.ts samples and bisects with it, and
+ * sublevelTransitions.ts scans for and brackets the field-insensitive points
+ * with it before refining them in Dec. Its numbers are never exported as
+ * results. Exact: no; energies to about 1e-15 of the largest |E| of a block,
+ * slopes to about 1e-15·(μB/h)·‖H‖/gap. Labels follow the same rule as the
+ * Dec solver (k-th lowest eigenvalue of a block ↔ k-th lowest F), so they
+ * agree wherever the block's eigenvalues are further apart than float64 can
+ * resolve.
+ *
+ * Worked example: 87Rb 5²S1/2 (A = 3417.341305452145 MHz) at 0 T gives
+ * F = 1 at −5A/4 = −4271.676631815… MHz and F = 2 at 3A/4 = 2563.005979089… MHz,
+ * and the stretched state |2, 2⟩ has slope (μB/h)(gJ/2 + 3gI/2) at any field.
+ */
+import { blockMatrixFloat, prepareHyperfineZeeman, type HyperfineZeemanLevel, type PreparedBlock, type PreparedLevel } from "./hyperfineZeeman.js";
+import { symmetricEigenFloat } from "./symmetricEigenFloat.js";
+
+/** One M block diagonalized in float64 at one field. */
+export interface FloatBlockSolution {
+  /** Eigenvalues E/h in Hz, ascending (rank k ↔ block.fByRank[k]). */
+  values: number[];
+  /** vectors[k]: normalized eigenvector of values[k] on the block basis. */
+  vectors: number[][];
+  /** dE/dB in Hz/T per rank. */
+  slopes: number[];
+}
+
+/** Energies and slopes of all sublevels, in the Dec solver's (F, mF) order. */
+export interface FloatFieldStates {
+  energy: Float64Array;
+  slope: Float64Array;
+}
+
+/** Diagonalize one prepared block at `tesla` in float64. */
+export function solveBlockFloat(prepared: PreparedLevel, block: PreparedBlock, tesla: number): FloatBlockSolution {
+  const mu = prepared.floatMuB_h;
+  const z = block.floatZeeman;
+  const { values, vectors } = symmetricEigenFloat(blockMatrixFloat(block, mu * tesla));
+  const slopes = vectors.map((v) => {
+    let s = 0;
+    for (let i = 0; i < v.length; i++) s += v[i]! * v[i]! * z[i]!;
+    return mu * s;
+  });
+  return { values, vectors, slopes };
+}
+
+/**
+ * d²E/dB² (Hz/T²) of the block's rank-k state from second-order perturbation
+ * theory in the Zeeman operator: 2·Σ_{j≠k} (μB/h)²⟨k|Z|j⟩²/(E_k − E_j),
+ * Z = gJ·Jz + gI·Iz. Float64; used to aim Newton steps, not as a result.
+ */
+export function curvatureFloat(prepared: PreparedLevel, block: PreparedBlock, sol: FloatBlockSolution, k: number): number {
+  const mu = prepared.floatMuB_h;
+  const z = block.floatZeeman;
+  const vk = sol.vectors[k]!;
+  let sum = 0;
+  for (let j = 0; j < vk.length; j++) {
+    if (j === k) continue;
+    const vj = sol.vectors[j]!;
+    let m = 0;
+    for (let i = 0; i < vk.length; i++) m += vk[i]! * z[i]! * vj[i]!;
+    sum += (m * m) / (sol.values[k]! - sol.values[j]!);
+  }
+  return 2 * mu * mu * sum;
+}
+
+/** A float64 solver for one level: energies and slopes at `tesla` (a float, ≥ 0). */
+export type HyperfineZeemanFloatSolver = (tesla: number) => FloatFieldStates;
+
+/** Prepare a level once and return its float64 solver (see the module comment). */
+export function hyperfineZeemanFloatSolver(level: HyperfineZeemanLevel | PreparedLevel): HyperfineZeemanFloatSolver {
+  const prepared = "blocks" in level ? level : prepareHyperfineZeeman(level);
+  return (tesla: number): FloatFieldStates => {
+    if (!(tesla >= 0)) throw new RangeError("field must be ≥ 0 T (the direction defines the quantization axis)");
+    const energy = new Float64Array(prepared.size);
+    const slope = new Float64Array(prepared.size);
+    for (const block of prepared.blocks) {
+      const sol = solveBlockFloat(prepared, block, tesla);
+      block.outIndex.forEach((pos, k) => {
+        energy[pos] = sol.values[k]!;
+        slope[pos] = sol.slopes[k]!;
+      });
+    }
+    return { energy, slope };
+  };
+}
