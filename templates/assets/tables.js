@@ -50,6 +50,7 @@
     // Filter box, inserted above the table (or its scroll wrapper).
     var tools = document.createElement("div");
     tools.className = "table-tools";
+    if (table.id) tools.setAttribute("data-for", table.id);
     var label = document.createElement("label");
     label.className = "table-filter";
     label.setAttribute("for", "table-filter-" + n);
