@@ -12,8 +12,18 @@ export const THIN_SPACE = "\u2009";
 export const MINUS = "\u2212";
 export const FIGURE_SPACE = "\u2007";
 
-function group(digits: string, fromLeft: boolean): string {
-  if (digits.length <= 4) return digits;
+/**
+ * Digits in groups of three with thin spaces, counted from the decimal point.
+ * Four digits stay together (common practice) unless `force` is set, which a
+ * column uses when any of its numbers needs grouping, so a column is grouped
+ * one way throughout.
+ */
+export function groupDigits(digits: string, fromLeft: boolean, force = false): string {
+  return group(digits, fromLeft, force);
+}
+
+function group(digits: string, fromLeft: boolean, force = false): string {
+  if (digits.length <= (force ? 3 : 4)) return digits;
   const parts: string[] = [];
   if (fromLeft) {
     for (let i = 0; i < digits.length; i += 3) parts.push(digits.slice(i, i + 3));
@@ -31,8 +41,13 @@ const SUPERSCRIPT: Record<string, string> = {
 export interface NumberParts {
   sign: string;
   int: string;
+  /** Decimal point and fraction digits, grouped; "" for an integer. */
   frac: string;
+  /** Concise uncertainty "(20)" or " ± 0.1", as written in the data; "" if none. */
+  unc?: string;
   exp: string;
+  /** Figure, punctuation and thin spaces after the number that line its decimal point up with the column (see alignTable). */
+  pad?: string;
 }
 
 /**
@@ -84,4 +99,50 @@ export function formatQuantum(k: number): string {
 /** A doubled m with explicit sign for non-zero values: "+3/2", "−1/2", "0". */
 export function formatM(k: number): string {
   return k > 0 ? "+" + formatDoubled(k) : formatQuantum(k);
+}
+
+const WRITTEN = /^([+-]?)(\d*)(?:\.(\d*))?(?:\((\d+)\))?(?:[eE]([+-]?\d+))?$/;
+
+function writtenPlain(text: string): NumberParts | null {
+  const m = WRITTEN.exec(text.trim());
+  if (!m) return null;
+  const [, sign = "", int = "", frac, unc, ex] = m;
+  if (int === "" && !frac) return null;
+  const exp = ex === undefined ? "" : "×10" + [...String(Number(ex))].map((ch) => SUPERSCRIPT[ch] ?? ch).join("");
+  return {
+    sign: sign === "-" ? MINUS : "",
+    int: group(int === "" ? "0" : int, false),
+    frac: frac ? "." + group(frac, true) : "",
+    unc: unc === undefined ? "" : `(${unc})`,
+    exp,
+  };
+}
+
+/**
+ * A measured number shown as its data file writes it: the same digits, no
+ * padding to a fixed count, the concise uncertainty kept, thin-space groups
+ * and a true minus added. "2.00233113(20)" → 2.002 331 13(20);
+ * "2.5 ± 0.1" → 2.5 ± 0.1. Null if the text is not a plain number.
+ */
+export function writtenParts(text: string): NumberParts | null {
+  const pm = /^(.*?)\s*(?:±|\+\/-|\+-)\s*(.*)$/.exec(text.trim());
+  if (pm) {
+    const v = writtenPlain(pm[1] ?? "");
+    const u = writtenPlain(pm[2] ?? "");
+    if (!v || !u || v.unc || u.unc) return null;
+    return { ...v, unc: ` ± ${u.sign}${u.int}${u.frac}${u.exp}`, exp: v.exp };
+  }
+  return writtenPlain(text);
+}
+
+/** Significant digits written in a number's mantissa: "0.00120" → 3, "407.24" → 5. */
+export function writtenDigits(text: string): number {
+  const m = /^[+-]?(\d*)(?:\.(\d*))?/.exec(text.trim());
+  const digits = ((m?.[1] ?? "") + (m?.[2] ?? "")).replace(/^0+/, "");
+  return Math.max(1, digits.length);
+}
+
+/** One display string of number parts (without padding). */
+export function partsText(p: NumberParts): string {
+  return p.sign + p.int + p.frac + (p.unc ?? "") + p.exp;
 }

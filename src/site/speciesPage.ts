@@ -7,10 +7,13 @@ import { hzPerTeslaToGHzPerTesla, hzPerTeslaToMHzPerGauss, hzPerTeslaToWavenumbe
 import { exportText } from "../physics/decimal.js";
 import type { LevelResult, LineResult, SpeciesResult } from "../results/types.js";
 import { componentAnchor, hyperfineAnchor, levelAnchor, lineAnchor, mFAnchor, mJAnchor } from "./anchors.js";
+import type { Quantity } from "../data/model.js";
 import {
+  alignTable,
   type Cell,
   type Column,
   fractionCell,
+  measuredCell,
   numberCell,
   quantumCell,
   type Table,
@@ -19,7 +22,9 @@ import {
   type TermParts,
   textCell,
 } from "./table.js";
-import { formatNumber } from "./format.js";
+import { formatNumber, partsText, writtenDigits, writtenParts } from "./format.js";
+
+const partsTextOf = (text: string): string => { const p = writtenParts(text); return p ? partsText(p) : text; };
 
 /** Significant digits shown for shifts and g values on pages. */
 export const SHOWN_DIGITS = 9;
@@ -67,9 +72,21 @@ export interface SpeciesPage {
 
 function gUsedCell(l: LevelResult): Cell {
   if (l.gJ === null) return { text: "—", sort: "" };
-  const c = numberCell(l.gJ, 12);
-  if (l.gJFrom === "measured" && l.input.gJ) return { ...c, text: l.input.gJ.text };
-  return c;
+  if (l.gJFrom === "measured" && l.input.gJ) return measuredCell(l.input.gJ, l.gJ);
+  return numberCell(l.gJ, SHOWN_DIGITS);
+}
+
+/**
+ * A measured quantity in the column's unit: as written when the data file
+ * used that unit, else converted and shown with the written number of
+ * significant digits (no digits invented by the conversion).
+ */
+export function quantityCell(q: Quantity | null | undefined, unit: string, siPerUnit: string): Cell {
+  if (!q) return numberCell(null);
+  const numberText = q.text.trim().slice(0, q.text.trim().length - q.unit.length).trim();
+  const value = q.si.div(siPerUnit);
+  if (q.unit === unit) return measuredCell(q, value, numberText);
+  return numberCell(value, writtenDigits(numberText));
 }
 
 export function speciesPage(s: SpeciesResult, csvBase: string): SpeciesPage {
@@ -99,8 +116,8 @@ export function speciesPage(s: SpeciesResult, csvBase: string): SpeciesPage {
         fractionCell(l.gJExact),
         gUsedCell(l),
         textCell(l.gJFrom === "measured" ? "measured" : l.gJFrom === "LS" ? "LS, gL and gS" : "J = 0"),
-        numberCell(l.input.hyperfine ? l.input.hyperfine.A.si.div("1e6") : null, 12),
-        numberCell(l.input.hyperfine?.B ? l.input.hyperfine.B.si.div("1e6") : null, 12),
+        quantityCell(l.input.hyperfine?.A, "MHz", "1e6"),
+        quantityCell(l.input.hyperfine?.B, "MHz", "1e6"),
         textCell(l.input.source),
       ],
     })),
@@ -159,7 +176,11 @@ export function speciesPage(s: SpeciesResult, csvBase: string): SpeciesPage {
           ),
         }
       : null;
-    return { level: l, termParts: termParts(l.input.term), anchor: `${levelAnchor(lid)}-shifts`, title: `${lid}`, sublevels, hyperfine, hyperfineSublevels };
+    return { level: l, termParts: termParts(l.input.term), anchor: `${levelAnchor(lid)}-shifts`, title: `${lid}`,
+      sublevels: alignTable(sublevels),
+      hyperfine: hyperfine && alignTable(hyperfine),
+      hyperfineSublevels: hyperfineSublevels && alignTable(hyperfineSublevels),
+    };
   });
 
   const lines: Table = {
@@ -183,7 +204,7 @@ export function speciesPage(s: SpeciesResult, csvBase: string): SpeciesPage {
         textCell(ln.upper.input.id, `#${levelAnchor(ln.upper.input.id)}`),
         textCell(ln.lower.input.id, `#${levelAnchor(ln.lower.input.id)}`),
         textCell(ln.input.multipole),
-        numberCell(ln.input.wavelength ? ln.input.wavelength.si.mul("1e9") : null, 12),
+        quantityCell(ln.input.wavelength, "nm", "1e-9"),
         numberCell(ln.gEff, SHOWN_DIGITS),
         textCell(ln.pattern ?? "—"),
         textCell(ln.summary),
@@ -195,7 +216,7 @@ export function speciesPage(s: SpeciesResult, csvBase: string): SpeciesPage {
     line: ln,
     anchor: `${lineAnchor(ln.input.id)}-components`,
     title: ln.input.id,
-    components: {
+    components: alignTable({
       id: `cmp:${ln.input.id}`,
       caption: `${ln.input.id} (${ln.upper.input.term.text} → ${ln.lower.input.term.text}): Zeeman components`,
       csvPath: `${csvBase}/line-${safeFile(ln.input.id)}.csv`,
@@ -222,16 +243,16 @@ export function speciesPage(s: SpeciesResult, csvBase: string): SpeciesPage {
           ...shiftCells(c.shiftHzPerT),
         ],
       })),
-    },
+    }),
   }));
   const nucleus = s.input.nucleus;
   return {
-    gIText: nucleus?.gI ? nucleus.gI.text : formatNumber(s.gI, 12),
+    gIText: nucleus?.gI ? partsTextOf(nucleus.gI.text) : formatNumber(s.gI, 12),
     gLText: formatNumber(s.gL, 12),
     gSText: formatNumber(s.gS, 15),
-    levels,
+    levels: alignTable(levels),
     levelSections,
-    lines,
+    lines: alignTable(lines),
     lineSections,
   };
 }

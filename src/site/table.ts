@@ -6,7 +6,11 @@
 import type { Dec } from "../physics/decimal.js";
 import { exportText } from "../physics/decimal.js";
 import type { Rational } from "../physics/rational.js";
-import { formatFraction, formatM, formatQuantum, numberParts, type NumberParts } from "./format.js";
+import type { Measured } from "../data/model.js";
+import { FIGURE_SPACE, THIN_SPACE, formatFraction, formatM, formatQuantum, groupDigits, numberParts, partsText, writtenParts, type NumberParts } from "./format.js";
+
+/** U+2008, as wide as the decimal point: pads a number that has none. */
+export const PUNCTUATION_SPACE = "\u2008";
 
 export type ColumnKind = "text" | "number" | "term" | "quantum" | "fraction";
 
@@ -36,8 +40,10 @@ export interface Cell {
   parts?: NumberParts;
   /** Exact Hz/T value for unit switching. */
   hzPerT?: string;
-  /** Exact fraction shown beside a decimal, e.g. "4/3". */
+  /** Exact fraction as data ("-4/3", ASCII minus), e.g. for the CSV. */
   exact?: string;
+  /** The exact fraction as shown before its decimal ("−4/3"), and "=" or "≈" between them. */
+  fraction?: { text: string; rel: "=" | "≈" };
   term?: TermParts;
   /** In-site link target (relative to the site root), e.g. "species/rb87/#level:5s-S1/2". */
   href?: string;
@@ -64,7 +70,19 @@ export const textCell = (text: string, href?: string): Cell => ({ text, sort: te
 export function numberCell(x: Dec | null, sig = 9, extra: Partial<Cell> = {}): Cell {
   if (x === null) return { text: "—", sort: "", ...extra };
   const parts = numberParts(x, sig);
-  return { text: parts.sign + parts.int + parts.frac + parts.exp, sort: exportText(x, 30), parts, ...extra };
+  return { text: partsText(parts), sort: exportText(x, 30), parts, ...extra };
+}
+
+/**
+ * A measured input shown as written (its own digits and concise
+ * uncertainty), sorted by its value. `value` is the number in the column's
+ * unit; when the written text cannot be shown as is, the value is shown
+ * with as many significant digits as were written.
+ */
+export function measuredCell(m: Measured, value: Dec = m.value, numberText: string = m.text): Cell {
+  const parts = writtenParts(numberText);
+  if (!parts) return numberCell(value, 9);
+  return { text: partsText(parts), sort: exportText(value, 30), parts };
 }
 
 export const quantumCell = (k: number, signed = false): Cell => ({
@@ -72,9 +90,38 @@ export const quantumCell = (k: number, signed = false): Cell => ({
   sort: String(k / 2),
 });
 
+/** Decimal places of a fraction whose decimal terminates, else null (2^a·5^b denominators only). */
+function terminatingPlaces(r: Rational): number | null {
+  let d = r.den;
+  let twos = 0;
+  let fives = 0;
+  while (d % 2n === 0n) (d /= 2n), twos++;
+  while (d % 5n === 0n) (d /= 5n), fives++;
+  return d === 1n ? Math.max(twos, fives) : null;
+}
+
+/** Significant digits of the decimal beside a fraction that does not terminate. */
+export const FRACTION_DIGITS = 6;
+
+/**
+ * An exact fraction with its decimal beside it: "1/4 = 0.25",
+ * "2/3 ≈ 0.666 667"; an integer is shown alone. The decimal carries the
+ * parts, so it aligns on its point with the rest of the column.
+ */
 export function fractionCell(r: Rational | null): Cell {
   if (r === null) return { text: "—", sort: "" };
-  return { text: formatFraction(r), sort: exportText(r.toDecimal(), 30), exact: r.toString() };
+  const sort = exportText(r.toDecimal(), 30);
+  if (r.den === 1n) {
+    const parts = numberParts(r.toDecimal(), Math.max(1, (r.num < 0n ? -r.num : r.num).toString().length));
+    return { text: partsText(parts), sort, exact: r.toString(), parts };
+  }
+  const places = terminatingPlaces(r);
+  const exactDecimal = places !== null && places <= FRACTION_DIGITS;
+  const dec = r.toDecimal();
+  const parts = exactDecimal ? numberParts(dec, Math.max(1, dec.abs().toFixed(places).replace(".", "").replace(/^0+/, "").length)) : numberParts(dec, FRACTION_DIGITS);
+  const rel = exactDecimal ? "=" : "≈";
+  const text = formatFraction(r);
+  return { text: `${text} ${rel} ${partsText(parts)}`, sort, exact: r.toString(), fraction: { text, rel }, parts };
 }
 
 /** Term symbol split for display as ²P°₃/₂ with HTML sup/sub. */
@@ -87,3 +134,61 @@ export const termCell = (t: { text: string; multiplicity: number; letter: string
   sort: t.text,
   term: termParts(t),
 });
+
+const DIGIT = /[0-9]/;
+
+/** How wide the part right of the decimal point is, counted per kind of character. */
+function rightWidth(p: NumberParts): { fig: number; punct: number; thin: number } {
+  let fig = 0;
+  let punct = 0;
+  let thin = 0;
+  for (const ch of p.frac + (p.unc ?? "") + p.exp) {
+    if (DIGIT.test(ch)) fig++;
+    else if (ch === THIN_SPACE) thin++;
+    else if (ch === " ") thin++; // around "±"; drawn as thin spaces in padding
+    else if (ch === "×" || ch === "±") fig++;
+    else punct++; // point, parentheses, superscripts: about the width of a point
+  }
+  return { fig, punct, thin };
+}
+
+/**
+ * Lines up the decimal points of every number and fraction column of a
+ * table: each right-aligned cell gets trailing figure spaces (digit width),
+ * punctuation spaces (point width) and thin spaces so that every cell has
+ * the same number of each to the right of its point. Digit groups are made
+ * uniform per column first: when any number of a column has five or more
+ * digits on one side of the point, four-digit runs on that side are grouped
+ * too. Returns a new table; `text` of each cell follows the regrouping.
+ */
+export function alignTable(t: Table): Table {
+  const rows = t.rows.map((r) => ({ ...r, cells: r.cells.map((c) => ({ ...c })) }));
+  t.columns.forEach((col, i) => {
+    if (col.kind !== "number" && col.kind !== "fraction") return;
+    const cells = rows.map((r) => r.cells[i]).filter((c): c is Cell => c?.parts !== undefined);
+    if (cells.length === 0) return;
+    const raw = (s: string) => s.replace(new RegExp(THIN_SPACE, "g"), "");
+    const forceInt = cells.some((c) => raw(c.parts!.int).length > 4);
+    const forceFrac = cells.some((c) => raw(c.parts!.frac).length - 1 > 4);
+    for (const c of cells) {
+      const p = c.parts!;
+      const before = partsText(p);
+      const frac = p.frac ? "." + groupDigits(raw(p.frac).slice(1), true, forceFrac) : "";
+      c.parts = { ...p, int: groupDigits(raw(p.int), false, forceInt), frac };
+      const after = partsText(c.parts);
+      if (after !== before) c.text = c.text.replace(before, after);
+    }
+    const widths = cells.map((c) => rightWidth(c.parts!));
+    const max = {
+      fig: Math.max(...widths.map((w) => w.fig)),
+      punct: Math.max(...widths.map((w) => w.punct)),
+      thin: Math.max(...widths.map((w) => w.thin)),
+    };
+    cells.forEach((c, k) => {
+      const w = widths[k]!;
+      const pad = FIGURE_SPACE.repeat(max.fig - w.fig) + PUNCTUATION_SPACE.repeat(max.punct - w.punct) + THIN_SPACE.repeat(max.thin - w.thin);
+      c.parts = { ...c.parts!, pad };
+    });
+  });
+  return { ...t, rows };
+}
