@@ -1,0 +1,205 @@
+/**
+ * Bench sheets: one printed page per species (and one for all species) to
+ * pin next to the apparatus. Rows are Table models (table.ts) so numbers
+ * align on their points like every other table; no downloads or row links.
+ *
+ * Per level: gJ (as written when measured, with the exact LS fraction), and
+ * the shift per unit m in MHz/G; per hyperfine level F: gF and the shift per
+ * unit mF. Linear shifts are odd in m (ΔE = g m μB B), so the per-m list
+ * gives m > 0 only; the sheet says so. Per line: λ, g_eff and the pattern.
+ */
+import type { ConstantsEdition } from "../physics/constants/constant.js";
+import { val } from "../physics/constants/constant.js";
+import { Dec } from "../physics/decimal.js";
+import { hzPerTeslaToMHzPerGauss } from "../physics/zeeman.js";
+import { formatDoubled } from "../physics/quantum.js";
+import type { SublevelShift } from "../results/types.js";
+import type { SpeciesResult } from "../results/types.js";
+import { formatM, formatNumber, formatQuantum, partsText, writtenParts } from "./format.js";
+import { levelAnchor, lineAnchor } from "./anchors.js";
+import { alignTable, fractionCell, measuredCell, numberCell, type Cell, type Table, termCell, textCell } from "./table.js";
+
+/** Significant digits of a per-unit-m shift on a sheet; list values get fewer. */
+export const SHEET_DIGITS = 6;
+export const SHEET_LIST_DIGITS = 4;
+
+const blank = (): Cell => ({ text: "", sort: "" });
+
+/**
+ * The shift per unit m (MHz/G) of a set of sublevels, from the sublevel of
+ * smallest positive m; null when every shift is zero or no m > 0 exists.
+ */
+export function shiftPerM(sublevels: SublevelShift[]): Dec | null {
+  const first = sublevels.filter((m) => m.m2 > 0).sort((a, b) => a.m2 - b.m2)[0];
+  if (!first || first.shiftHzPerT.isZero()) return null;
+  return hzPerTeslaToMHzPerGauss(first.shiftHzPerT).mul(2).div(first.m2);
+}
+
+/**
+ * The shifts in MHz/G as "m shift" pairs. When the shifts are odd in m (the
+ * linear case), only m > 0 is listed; otherwise every m. Example for gF = 1/2:
+ * "+1 0.7 · +2 1.4".
+ */
+export function shiftList(sublevels: SublevelShift[], digits = SHEET_LIST_DIGITS): { text: string; oddInM: boolean } {
+  const byM = new Map(sublevels.map((m) => [m.m2, m.shiftHzPerT]));
+  const oddInM = sublevels.every((m) => {
+    const mirror = byM.get(-m.m2);
+    return mirror !== undefined && mirror.neg().eq(m.shiftHzPerT);
+  });
+  const shown = [...sublevels].filter((m) => !oddInM || m.m2 > 0).sort((a, b) => a.m2 - b.m2);
+  const text = shown.map((m) => `${formatM(m.m2)}\u00a0${formatNumber(hzPerTeslaToMHzPerGauss(m.shiftHzPerT), digits)}`).join(" · ");
+  return { text, oddInM };
+}
+
+export interface SpeciesSheet {
+  id: string;
+  label: string;
+  nuclearSpin: string | null;
+  gIText: string | null;
+  /** One table: a row per level, then a row per F of that level. */
+  sublevels: Table;
+  lines: Table;
+  /** False when some list had to give negative m too (never for linear shifts). */
+  allOdd: boolean;
+}
+
+export interface SheetOptions {
+  /** List the shift of each m > 0 (per-species sheet) or only the per-m rule (all-species sheet). */
+  mList: boolean;
+}
+
+export function speciesSheet(s: SpeciesResult, opts: SheetOptions): SpeciesSheet {
+  let allOdd = true;
+  const list = (subs: SublevelShift[]): Cell => {
+    const l = shiftList(subs);
+    if (!l.oddInM) allOdd = false;
+    return textCell(l.text);
+  };
+  const rows: Table["rows"] = [];
+  for (const l of s.levels) {
+    const lid = l.input.id;
+    const g: Cell =
+      l.gJ === null ? textCell("—") : l.gJFrom === "measured" && l.input.gJ ? measuredCell(l.input.gJ, l.gJ) : numberCell(l.gJ, SHEET_DIGITS);
+    rows.push({
+      anchor: `sheet:${levelAnchor(lid)}`,
+      cells: [
+        textCell(lid),
+        termCell(l.input.term),
+        textCell(`J = ${formatQuantum(l.J2)}`),
+        g,
+        fractionCell(l.gJExact),
+        numberCell(shiftPerM(l.sublevels), SHEET_DIGITS),
+        ...(opts.mList ? [list(l.sublevels)] : []),
+      ],
+    });
+    for (const h of l.hyperfine) {
+      rows.push({
+        anchor: `sheet:${levelAnchor(lid)}:F=${formatDoubled(h.F2)}`,
+        cells: [
+          blank(),
+          blank(),
+          textCell(`F = ${formatQuantum(h.F2)}`),
+          numberCell(h.gF, SHEET_DIGITS),
+          blank(),
+          numberCell(shiftPerM(h.sublevels), SHEET_DIGITS),
+          ...(opts.mList ? [list(h.sublevels)] : []),
+        ],
+      });
+    }
+  }
+  const sublevels: Table = alignTable({
+    id: `sheet-levels:${s.input.id}`,
+    caption: "Levels and sublevels",
+    csvPath: "",
+    columns: [
+      { key: "level", label: "level", kind: "text" },
+      { key: "term", label: "term", kind: "term" },
+      { key: "which", label: "J / F", kind: "text" },
+      { key: "g", label: "gJ / gF", kind: "number" },
+      { key: "gLS", label: "gJ, LS exact", kind: "fraction" },
+      { key: "perM", label: "per unit m", unit: "MHz/G", kind: "number" },
+      ...(opts.mList ? [{ key: "list", label: "shift at m > 0", unit: "MHz/G", kind: "text" as const }] : []),
+    ],
+    rows,
+  });
+  const lines: Table = alignTable({
+    id: `sheet-lines:${s.input.id}`,
+    caption: "Lines",
+    csvPath: "",
+    columns: [
+      { key: "line", label: "line", kind: "text" },
+      { key: "transition", label: "upper → lower", kind: "text" },
+      { key: "wavelength", label: "λ", unit: "nm", kind: "number" },
+      { key: "g_eff", label: "g_eff", kind: "number" },
+      { key: "pattern", label: "pattern", kind: "text" },
+      { key: "reading", label: "reading", kind: "text" },
+    ],
+    rows: s.lines.map((ln) => ({
+      anchor: `sheet:${lineAnchor(ln.input.id)}`,
+      cells: [
+        textCell(ln.input.id),
+        textCell(`${ln.upper.input.id} → ${ln.lower.input.id}`),
+        ln.input.wavelength ? wavelengthCell(ln.input.wavelength) : numberCell(null),
+        numberCell(ln.gEff, SHEET_DIGITS),
+        textCell(ln.pattern ?? "—"),
+        textCell(ln.summary),
+      ],
+    })),
+  });
+  const nucleus = s.input.nucleus;
+  return {
+    id: s.input.id,
+    label: s.input.label,
+    nuclearSpin: nucleus ? formatQuantum(nucleus.I2) : null,
+    gIText: nucleus ? (nucleus.gI ? writtenText(nucleus.gI.text) : formatNumber(s.gI, SHEET_DIGITS)) : null,
+    sublevels,
+    lines,
+    allOdd,
+  };
+}
+
+function writtenText(text: string): string {
+  const p = writtenParts(text);
+  return p ? partsText(p) : text;
+}
+
+function wavelengthCell(q: { text: string; unit: string; si: Dec }): Cell {
+  const numberText = q.text.trim().slice(0, q.text.trim().length - q.unit.length).trim();
+  const value = q.si.mul("1e9");
+  return q.unit === "nm" ? measuredCell({ value, uncertainty: null, text: numberText }, value, numberText) : numberCell(value, 9);
+}
+
+export interface FieldRule {
+  /** As configured, e.g. "3.228 G". */
+  text: string;
+  /** One Lorentz unit μB·B/h at this field, in MHz, shown. */
+  lorentzMHz: string;
+}
+
+/**
+ * The configured bias fields with the size of one Lorentz unit at each
+ * (μB·B/h, the shift of a sublevel with g·m = 1), so a reader multiplies
+ * a "per unit m" entry by m and by the field, or a Lorentz shift by this.
+ * Example, CODATA 2022: μB/h = 13.996 244 9… GHz/T, so 10 G gives 13.996 2 MHz.
+ */
+export function fieldRules(fields: { text: string; tesla: string }[], constants: ConstantsEdition): FieldRule[] {
+  const muB_h = val(constants.muB_h);
+  return fields.map((f) => ({
+    text: f.text,
+    lorentzMHz: new Dec(f.tesla).isZero() ? "0" : formatNumber(muB_h.mul(new Dec(f.tesla)).div("1e6"), SHEET_DIGITS),
+  }));
+}
+
+/** μB/h in MHz/G, shown: the bench rule printed on every sheet. */
+export function bohrRule(constants: ConstantsEdition): string {
+  return formatNumber(hzPerTeslaToMHzPerGauss(val(constants.muB_h)), 9);
+}
+
+/**
+ * Where a printed sheet leads back to: the full address when site.yaml gives
+ * siteUrl, else the path inside the atlas with a note.
+ */
+export function sheetAddress(siteUrl: string | null, path: string): { text: string; full: boolean } {
+  if (!siteUrl) return { text: path, full: false };
+  return { text: siteUrl.replace(/\/+$/, "") + "/" + path.replace(/^\/+/, ""), full: true };
+}
