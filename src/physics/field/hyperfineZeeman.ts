@@ -14,11 +14,16 @@
  * Method: in the uncoupled basis |mJ mI⟩ the Hamiltonian conserves
  * M = mJ + mI, so it splits into blocks of at most 2·min(I, J) + 1 states.
  * Matrix elements are exact rationals or square roots of exact rationals
- * (one Dec square root each); each block is diagonalized by Jacobi rotations
- * in Dec (symmetricEigen.ts). Exact: no; eigenvalues agree with a 50-digit
- * mpmath diagonalization of the full matrix to better than 1e-45 of the
- * largest |E| (test/physics/field/hyperfineZeeman.test.ts). At B = 0 the
- * eigenvalues are the exact F levels of hyperfine.ts, degenerate in mF.
+ * (one Dec square root each, computed once per (I, J)); each block is
+ * diagonalized in Dec by symmetricEigen.ts (2×2 blocks by an exact Jacobi
+ * rotation; wider blocks from a float64 start finished in Dec). Everything
+ * this module returns is exact-decimal in that sense; float64 only chooses
+ * the starting basis. Exact: no; eigenvalues agree with a 50-digit mpmath
+ * diagonalization of the full matrix to better than 1e-25 of the largest |E|
+ * (test/physics/field/hyperfineZeeman.test.ts; the method's own error is
+ * about 1e-45 of the block's norm). At B = 0 the eigenvalues are the F
+ * levels of hyperfine.ts, degenerate in mF (exactly to Dec precision for
+ * 2×2 blocks, to ~1e-45 relative for wider ones).
  *
  * Labelling rule (no crossings inside one M block, since all its states
  * share the same symmetry):

@@ -17,14 +17,30 @@
  * For each line: zero-field frequency (exact, hyperfine.ts); first-order
  * sensitivity (μB/h)(gF′mF′ − gF·mF) (exact); second-order sensitivity
  * β′ − β (quadraticZeeman.ts, exact, null when perturbation theory fails);
- * the exact frequency at each requested field (hyperfineZeeman.ts); and each
- * field-insensitive point df/dB = 0 in (fromTesla, toTesla), default
- * (1e-8 T, 1 T). Method: df/dB from the Hellmann–Feynman slopes of the
- * exact eigenstates, sampled on a geometric grid (default 20 points per
- * decade); each sign change is refined by the Illinois variant of regula
- * falsi to 1e-25 relative in B. Two roots closer than one grid step, or a
- * double root (df/dB touching zero), would be missed. Not exact: the point
- * is found to ~25 digits of the exact Hamiltonian's value.
+ * the exact frequency at each requested field (hyperfineZeeman.ts, exact
+ * Dec solve); and each field-insensitive point df/dB = 0 in (fromTesla,
+ * toTesla), default (1e-8 T, 1 T).
+ *
+ * Method for the field-insensitive points: df/dB is the difference of the
+ * Hellmann–Feynman slopes. It is sampled on a geometric grid (default 20
+ * points per decade) with the float64 twin of the solver
+ * (hyperfineZeemanFloat.ts); each sign change is narrowed in float64 by
+ * safeguarded Newton steps (analytic second derivative from perturbation
+ * theory, bisection as the fallback) to float resolution, ~1e-13 relative.
+ * From there Dec takes over: Newton steps whose df/dB is computed in Dec
+ * (floatSeededSublevel.ts: the two sublevels' energies and slopes from the
+ * Dec Hamiltonian, refined from the float eigenvectors) and whose second
+ * derivative, needed only roughly, is the float one; it stops when a step
+ * is below 1e-25 relative in B (usually after two Dec evaluations). If that
+ * does not converge, Illinois regula falsi on the full Dec solve finishes
+ * the bracket. Sign changes of df/dB smaller than 1e-12·(μB/h)·max|gJ·mJ +
+ * gI·mI| at both grid ends are taken as float noise and skipped. Two roots
+ * closer than one grid step, or a double root (df/dB touching zero), would
+ * be missed. Not exact: the point's field is exact-decimal to ~1e-25
+ * relative (Dec-refined; float64 only locates it), and its frequency is the
+ * Dec frequency at the last Dec evaluation corrected by f′·Δ/2, good to
+ * ~1e-30 relative. Grid and bracketing are float-derived, so a root whose
+ * df/dB changes sign only below float64 resolution would be missed.
  *
  * Worked example: 87Rb 5²S1/2 (A = 3417.341305452145 MHz, gJ = 2.00233113,
  * gI = −0.0009951414, μB/h = 13996244917.1 Hz/T): the two-photon line
@@ -72,6 +88,12 @@ export interface TransitionOptions {
   fromTesla?: Dec;
   toTesla?: Dec;
   pointsPerDecade?: number;
+  /**
+   * The caller's own hyperfineZeemanSolver(level) results at each of `fields`,
+   * same order, to be used instead of solving again (the exact solves are
+   * most of the cost when a caller tabulates energies at the same fields).
+   */
+  statesAtFields?: readonly (readonly FieldState[])[];
 }
 
 const GAUSS = new Dec("1e-4");
@@ -123,7 +145,11 @@ export function sublevelTransitions(level: HyperfineZeemanLevel, fields: readonl
     }
   }
   // states come back from the solvers in the same (F, mF) order as `labels`
-  const atFields = fields.map((b) => ({ tesla: b, states: solve(b) }));
+  const given = options.statesAtFields;
+  if (given && (given.length !== fields.length || given.some((st) => st.length !== prepared.size))) {
+    throw new RangeError("statesAtFields must hold one full solve per field");
+  }
+  const atFields = fields.map((b, i) => ({ tesla: b, states: given?.[i] ?? solve(b) }));
 
   // field-insensitive points: float64 grid scan shared by all lines, float bracketing, Dec refinement per root
   const from = options.fromTesla ?? new Dec("1e-8");
@@ -235,7 +261,7 @@ function refineRoot(
   return { tesla: root, hz: freq(solve(root), p) };
 }
 
-const freq = (s: FieldState[], p: Pair) => s[p.up]!.energy.minus(s[p.lo]!.energy);
+const freq = (s: readonly FieldState[], p: Pair) => s[p.up]!.energy.minus(s[p.lo]!.energy);
 const deriv = (s: FieldState[], p: Pair) => s[p.up]!.slope.minus(s[p.lo]!.slope);
 const MAX_DEC_STEPS = 6;
 

@@ -4,18 +4,24 @@
  * Method: cyclic Jacobi rotations (C. G. J. Jacobi, 1846; rotation formulas
  * as in W. H. Press et al., "Numerical Recipes", 3rd ed., §11.1), which
  * converge unconditionally and quadratically and need no special care for
- * repeated or close eigenvalues. To keep the Dec work small, matrices wider
- * than 2 are first diagonalized by the same Jacobi method in float64; the
- * float eigenvectors are re-orthonormalized in Dec (Gram–Schmidt), the
- * matrix is transformed to that basis in Dec, and Dec Jacobi finishes the
- * job from off-diagonal elements of about 1e-16 of the norm. The float
- * stage only chooses a starting basis: the transformation is an exact
- * similarity to Dec precision, so it does not limit the result.
+ * repeated or close eigenvalues. Matrices of width ≤ 2 go straight to Dec
+ * Jacobi (one exact rotation). Wider ones are first diagonalized in float64
+ * (symmetricEigenFloat.ts); the float eigenvectors are re-orthonormalized in
+ * Dec (modified Gram–Schmidt, the normalization by the series of 1/√(1+x)),
+ * the matrix is transformed to that basis in Dec, a = QᵀHQ, and since its
+ * off-diagonal elements are then ~1e-16 of the norm, one second-order
+ * perturbation step finishes: values a_ii + Σ_j a_ij²/(a_ii − a_jj), vectors
+ * q_i + Σ_j a_ij/(a_ii − a_jj)·q_j renormalized. The step is taken only when
+ * every |a_ij| ≤ 1e-14·|a_ii − a_jj| (well-separated eigenvalues); otherwise
+ * (repeated or close eigenvalues) Dec Jacobi continues from a. The float
+ * stage only chooses a starting basis: the transformation is a similarity
+ * to Dec precision, so it does not limit the result.
  *
- * Exact: no. Rotations stop once every off-diagonal element is below 1e-30
- * of the Frobenius norm ‖H‖, so eigenvalues carry an error of about
- * 1e-60·‖H‖²/gap (plus Dec rounding, ~1e-58·‖H‖) and eigenvectors about
- * 1e-30·‖H‖/gap, where gap is the distance to the nearest other eigenvalue.
+ * Exact: no. Jacobi stops once every off-diagonal element is below 1e-30 of
+ * the Frobenius norm ‖H‖: eigenvalue error ~1e-60·‖H‖²/gap, eigenvector
+ * error ~1e-30·‖H‖/gap. The perturbation step leaves third-order terms:
+ * eigenvalue error ≲ 1e-28·max|a_ij| ≈ 1e-44·‖H‖, eigenvector error
+ * ≲ 1e-28 (in practice ~1e-32). Both keep the trace to Dec precision.
  *
  * Worked example: [[2, 1], [1, 2]] → values [1, 3], vectors
  * [1, −1]/√2 and [1, 1]/√2 (up to sign).
@@ -110,10 +116,14 @@ function jacobiDec(a: Dec[][], v: Dec[][], threshold2: Dec): void {
   throw new Error("Jacobi iteration did not converge");
 }
 
-/** 1/√(1+x) for |x| < 1e-10 by its series (error < 1e-70), else by a Dec square root. */
+/** 1/√(1+x) for |x| < 1e-10 by its series (error < 1e-60), else by a Dec square root. */
 function invSqrtOnePlus(x: Dec): Dec {
-  if (x.abs().lt(TINY)) return series(x, INVSQRT_SERIES);
-  return ONE.div(ONE.plus(x).sqrt());
+  if (x.isZero()) return ONE;
+  if (!x.abs().lt(TINY)) return ONE.div(ONE.plus(x).sqrt());
+  // only as many terms as |x|^(terms+1) < 1e-60 needs (a seed good to 1e-16 needs three)
+  const e = x.e;
+  const terms = e < -31 ? 1 : e < -20 ? 2 : e < -15 ? 3 : 5;
+  return series(x, INVSQRT_SERIES.slice(0, terms));
 }
 
 /** Columns of a float matrix, orthonormalized in Dec by modified Gram–Schmidt. */

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { dec } from "../../../src/physics/decimal.js";
 import { sublevelTransitions } from "../../../src/physics/field/sublevelTransitions.js";
+import { hyperfineZeemanSolver, solveHyperfineZeeman } from "../../../src/physics/field/hyperfineZeeman.js";
 import { RB87_5S } from "./levels.js";
 
 describe("sublevelTransitions", () => {
@@ -33,5 +34,32 @@ describe("sublevelTransitions", () => {
     expect(z.firstOrder.hzPerTesla.gt(0)).toBe(true);
     // all zero-field frequencies are non-negative by construction of upper/lower
     expect(lines.every((l) => !l.zeroFieldHz.isNegative())).toBe(true);
+  });
+
+  it("puts the 87Rb point where the exact Dec slopes of |1,−1⟩ and |2,1⟩ become equal, to 1e-25 in B", () => {
+    const l = find([2, -2], [4, 2]);
+    const p = l.fieldInsensitive[0]!;
+    // df/dB from the full Dec solve just below and just above the reported field (definition of the point)
+    const dfdb = (t: typeof p.tesla) => {
+      const s = solveHyperfineZeeman(RB87_5S, t);
+      const up = s.find((x) => x.F2 === 4 && x.mF2 === 2)!;
+      const lo = s.find((x) => x.F2 === 2 && x.mF2 === -2)!;
+      return { d: up.slope.minus(lo.slope), f: up.energy.minus(lo.energy) };
+    };
+    const below = dfdb(p.tesla.mul(dec("0.9999999999999999999999999"))); // 1 − 1e-25
+    const above = dfdb(p.tesla.mul(dec("1.0000000000000000000000001")));
+    expect(below.d.isNegative()).not.toBe(above.d.isNegative());
+    // the reported frequency is the exact frequency there (stationary, so 1e-25 in B is far below 1e-30 in f)
+    expect(dfdb(p.tesla).f.minus(p.hz).abs().div(p.hz).lt(dec("1e-30"))).toBe(true);
+    // doc example 3.228917 G: our own computation (the outside check is the 3.23 G from memory in the first test)
+    expect(p.tesla.toSignificantDigits(7).toString()).toBe("0.0003228917");
+  });
+
+  it("uses the caller's solves at the fields when given, with identical frequencies", () => {
+    const fields = [dec("0"), dec("0.0001")];
+    const solve = hyperfineZeemanSolver(RB87_5S);
+    const reused = sublevelTransitions(RB87_5S, fields, { statesAtFields: fields.map((b) => solve(b)) });
+    reused.forEach((l, i) => l.atFields.forEach((a, j) => expect(a.hz.eq(lines[i]!.atFields[j]!.hz)).toBe(true)));
+    expect(() => sublevelTransitions(RB87_5S, fields, { statesAtFields: [solve(dec("0"))] })).toThrow(RangeError);
   });
 });

@@ -1,7 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { dec } from "../../../src/physics/decimal.js";
 import { linearValidity, paschenBackField } from "../../../src/physics/field/validity.js";
-import { RB87_5S } from "./levels.js";
+import { solveHyperfineZeeman } from "../../../src/physics/field/hyperfineZeeman.js";
+import { gF } from "../../../src/physics/hyperfine.js";
+import { CS133_6S, RB87_5S } from "./levels.js";
 
 describe("linearValidity", () => {
   it("gives the 87Rb Paschen–Back field 2A/((μB/h)gJ) = 0.2438770 T (doc example)", () => {
@@ -23,5 +25,23 @@ describe("linearValidity", () => {
     const v = linearValidity(RB87_5S, { absoluteHz: dec("1e30"), relative: dec("1e30"), maxTesla: dec("0.001") });
     expect(v.absolute.tesla).toBeNull();
     expect(v.relative.tesla).toBeNull();
+  });
+
+  it("reports the float-derived 1 kHz field where the exact Dec deviation crosses 1 kHz, to 1e-6 relative", () => {
+    for (const level of [RB87_5S, CS133_6S]) {
+      const v = linearValidity(level);
+      const { F2, mF2 } = v.absolute.sublevel!;
+      const deviation = (t: string) => {
+        const b = v.absolute.tesla!.mul(dec(t));
+        const s = solveHyperfineZeeman(level, b).find((x) => x.F2 === F2 && x.mF2 === mF2)!;
+        const s0 = solveHyperfineZeeman(level, dec("0")).find((x) => x.F2 === F2 && x.mF2 === mF2)!;
+        const g = gF(level.gJ, level.gI, level.I2, level.J2, F2) ?? dec("0");
+        const linear = level.muB_h.mul(g).mul(mF2).div(2).mul(b);
+        return linear.minus(s.energy.minus(s0.energy)).abs();
+      };
+      // the criterion's own definition: |linear − exact| ≤ 1000 Hz (module comment)
+      expect(deviation("0.999999").lte(dec("1000"))).toBe(true);
+      expect(deviation("1.000001").gt(dec("1000"))).toBe(true);
+    }
   });
 });
