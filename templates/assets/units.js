@@ -91,6 +91,44 @@
   }
   function save(v) { try { root.localStorage.setItem(KEY, v); } catch (e) { /* not remembered */ } }
 
+  var FIGURE = "\u2007", PUNCT = "\u2008";
+  function raw(s) { return s.split(THIN).join(""); }
+  function regroup(digits, fromLeft, force) {
+    if (digits.length <= (force ? 3 : 4)) return digits;
+    return groupAll(digits, fromLeft);
+  }
+  function groupAll(digits, fromLeft) {
+    var parts = [], i;
+    if (fromLeft) for (i = 0; i < digits.length; i += 3) parts.push(digits.slice(i, i + 3));
+    else for (i = digits.length; i > 0; i -= 3) parts.unshift(digits.slice(Math.max(0, i - 3), i));
+    return parts.join(THIN);
+  }
+  /** Width right of the decimal point per kind of space, as the server's decimal alignment counts it (src/site/table.ts). */
+  function rightWidth(p) {
+    var w = { fig: 0, punct: 0, thin: 0 };
+    Array.from(p.frac + p.exp).forEach(function (ch) {
+      if (/[0-9]/.test(ch) || ch === "×") w.fig++;
+      else if (ch === THIN) w.thin++;
+      else w.punct++;
+    });
+    return w;
+  }
+  /** One column's numbers grouped alike and padded so their decimal points line up, like the server's. */
+  function align(list) {
+    var forceInt = list.some(function (p) { return raw(p.int).length > 4; });
+    var forceFrac = list.some(function (p) { return raw(p.frac).length - 1 > 4; });
+    list.forEach(function (p) {
+      p.int = regroup(raw(p.int), false, forceInt);
+      if (p.frac) p.frac = "." + regroup(raw(p.frac).slice(1), true, forceFrac);
+    });
+    var ws = list.map(rightWidth);
+    var max = { fig: 0, punct: 0, thin: 0 };
+    ws.forEach(function (w) { for (var k in max) max[k] = Math.max(max[k], w[k]); });
+    list.forEach(function (p, i) {
+      p.pad = FIGURE.repeat(max.fig - ws[i].fig) + PUNCT.repeat(max.punct - ws[i].punct) + THIN.repeat(max.thin - ws[i].thin);
+    });
+  }
+
   /** Cell markup as the server writes it (templates/_includes/macros.njk). */
   function fill(td, parts) {
     var n = document.createElement("span");
@@ -98,9 +136,14 @@
     n.appendChild(document.createTextNode(parts.sign + parts.int));
     var fr = document.createElement("span");
     fr.className = "frac";
-    fr.textContent = parts.frac;
+    fr.textContent = parts.frac + parts.exp;
     n.appendChild(fr);
-    if (parts.exp) n.appendChild(document.createTextNode(parts.exp));
+    if (parts.pad) {
+      var pad = document.createElement("span");
+      pad.className = "pad";
+      pad.textContent = parts.pad;
+      n.appendChild(pad);
+    }
     td.textContent = "";
     td.appendChild(n);
   }
@@ -113,15 +156,17 @@
         if (!th.hasAttribute("data-switchable")) return;
         var u = th.querySelector(".unit");
         if (u) u.textContent = "(" + unit + ")";
+        var tds = [], list = [];
         Array.prototype.forEach.call(table.tBodies, function (tb) {
           Array.prototype.forEach.call(tb.rows, function (tr) {
             var td = tr.cells[col];
             var v = td && td.getAttribute("data-hz-per-t");
-            if (!v) return;
-            var parts = convert(v, unit);
-            if (parts) fill(td, parts);
+            var parts = v ? convert(v, unit) : null;
+            if (parts) { tds.push(td); list.push(parts); }
           });
         });
+        align(list);
+        tds.forEach(function (td, i) { fill(td, list[i]); });
       });
     });
   }

@@ -1,0 +1,49 @@
+import { existsSync } from "node:fs";
+import { join } from "node:path";
+import { AxeBuilder } from "@axe-core/playwright";
+import type { BrowserContext } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { CHROMIUM, hasChromium, launchBrowser, serveStatic, type StaticServer } from "../support/browser.js";
+import { demoSite } from "../support/runBuild.js";
+
+if (!hasChromium) console.warn(`browser tests skipped: no Chromium at ${CHROMIUM} (install Debian's chromium package or set CHROMIUM_PATH)`);
+
+// One page of each type; the bench sheets only where the build writes them.
+const PAGES = ["index.html", "species/rb87/index.html", "species/sr88/index.html", "constants/index.html", "methods/index.html", "sheet/index.html", "species/rb87/sheet/index.html"];
+
+describe.skipIf(!hasChromium)("accessibility of every page type (axe-core), with the scripts running", () => {
+  let site: string;
+  let ctx: BrowserContext;
+  let server: StaticServer;
+  beforeAll(async () => {
+    site = await demoSite();
+    ctx = await launchBrowser();
+    server = await serveStatic(site, "/");
+  }, 600_000);
+  afterAll(async () => {
+    await ctx?.close();
+    await server?.close();
+  });
+
+  for (const path of PAGES) {
+    it(`${path} has no serious or critical violations, no console errors and no outside requests`, async (t) => {
+      if (!existsSync(join(site, path))) t.skip();
+      const page = await ctx.newPage();
+      const problems: string[] = [];
+      page.on("console", (m) => { if (m.type() === "error") problems.push(`console: ${m.text()}`); });
+      page.on("pageerror", (e) => problems.push(`page error: ${e.message}`));
+      page.on("request", (r) => { if (!r.url().startsWith(server.url) && !r.url().startsWith("data:")) problems.push(`request: ${r.url()}`); });
+      await page.goto(server.url + path);
+      // With results showing, so the finder's list is checked too.
+      await page.locator("#finder-input").pressSequentially("F=2");
+      await page.locator("#finder-results a").first().waitFor();
+      const result = await new AxeBuilder({ page }).analyze();
+      const bad = result.violations
+        .filter((v) => v.impact === "serious" || v.impact === "critical")
+        .map((v) => `${v.id} (${v.impact}): ${v.nodes.slice(0, 3).map((n) => n.target.join(" ")).join(", ")}`);
+      expect(bad).toEqual([]);
+      expect(problems).toEqual([]);
+      await page.close();
+    });
+  }
+});

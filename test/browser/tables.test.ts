@@ -1,0 +1,122 @@
+import type { BrowserContext, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { dec } from "../../src/physics/decimal.js";
+import { CHROMIUM, hasChromium, launchBrowser, serveStatic, type StaticServer } from "../support/browser.js";
+import { demoSite } from "../support/runBuild.js";
+
+if (!hasChromium) console.warn(`browser tests skipped: no Chromium at ${CHROMIUM} (install Debian's chromium package or set CHROMIUM_PATH)`);
+
+/** data-sort keys of one column of a table, in the order shown (visible rows only). */
+function columnKeys(page: Page, tableId: string, col: number): Promise<string[]> {
+  return page.evaluate(
+    ([id, c]) =>
+      Array.from(document.getElementById(id as string)!.querySelectorAll("tbody tr"))
+        .filter((tr) => !(tr as HTMLElement).hidden)
+        .map((tr) => (tr as HTMLTableRowElement).cells[c as number]!.getAttribute("data-sort") ?? ""),
+    [tableId, col],
+  );
+}
+function headerButton(page: Page, tableId: string, col: number) {
+  return page.locator(`[id="${tableId}"] thead th`).nth(col).locator("button.sort");
+}
+function ariaSorts(page: Page, tableId: string): Promise<(string | null)[]> {
+  return page.locator(`[id="${tableId}"] thead th`).evaluateAll((ths) => ths.map((th) => th.getAttribute("aria-sort")));
+}
+const byValue = (a: string, b: string) => dec(a).comparedTo(dec(b));
+
+describe.skipIf(!hasChromium)("table filter and sort in the browser", () => {
+  let ctx: BrowserContext;
+  let server: StaticServer;
+  let errors: string[];
+  beforeAll(async () => {
+    const site = await demoSite();
+    ctx = await launchBrowser();
+    server = await serveStatic(site, "/");
+  }, 600_000);
+  afterAll(async () => {
+    await ctx?.close();
+    await server?.close();
+  });
+  async function open(path: string): Promise<Page> {
+    const page = await ctx.newPage();
+    errors = [];
+    page.on("pageerror", (e) => errors.push(e.message));
+    page.on("console", (m) => { if (m.type() === "error") errors.push(m.text()); });
+    await page.goto(server.url + path);
+    return page;
+  }
+
+  it("puts a filter box above every table", async () => {
+    const page = await open("species/rb87/");
+    const counts = await page.evaluate(() => [document.querySelectorAll("table.atlas-table").length, document.querySelectorAll(".table-tools input[type=search]").length]);
+    expect(counts[0]).toBeGreaterThan(3);
+    expect(counts[1]).toBe(counts[0]);
+    await page.close();
+  });
+
+  it("filters rows as the reader types and says how many are left", async () => {
+    const page = await open("species/rb87/");
+    // rb87 has three levels (data/species/rb87.yaml); one of them is 5p-P3/2.
+    await page.locator('.table-tools[data-for="table-levels"] input').pressSequentially("P3/2");
+    expect(await page.evaluate(() => Array.from(document.querySelectorAll("#table-levels tbody tr")).filter((r) => !(r as HTMLElement).hidden).map((r) => r.id))).toEqual(["level:5p-P3/2"]);
+    expect(await page.locator('.table-tools[data-for="table-levels"] .table-count').textContent()).toBe("1 of 3 rows");
+    // A typed ASCII minus finds the page's true minus (U+2212).
+    await page.locator('.table-tools[data-for="table-mf:5s-S1/2"] input').pressSequentially("-2");
+    const shown = await page.evaluate(() => Array.from(document.querySelectorAll('[id="table-mf:5s-S1/2"] tbody tr')).filter((r) => !(r as HTMLElement).hidden).map((r) => r.id));
+    expect(shown).toContain("level:5s-S1/2:F=2:mF=-2");
+    await page.locator('.table-tools[data-for="table-levels"] input').fill("");
+    expect(await columnKeys(page, "table-levels", 0)).toHaveLength(3);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it("sorts a signed number column by value, not as text, both ways, with aria-sort on the header", async () => {
+    const page = await open("species/rb87/");
+    const id = "table-mf:5s-S1/2";
+    const col = await page.locator(`[id="${id}"] thead th`).evaluateAll((ths) => ths.findIndex((th) => th.hasAttribute("data-switchable")));
+    expect(col).toBeGreaterThan(0);
+    const original = await columnKeys(page, id, col);
+    // The column mixes signs, and text order would differ from value order: the test can fail.
+    expect(original.some((k) => k.startsWith("-")) && original.some((k) => !k.startsWith("-"))).toBe(true);
+    expect([...original].sort()).not.toEqual([...original].sort(byValue));
+
+    await headerButton(page, id, col).click();
+    expect(await columnKeys(page, id, col)).toEqual([...original].sort(byValue));
+    expect((await ariaSorts(page, id))[col]).toBe("ascending");
+    await headerButton(page, id, col).click();
+    expect(await columnKeys(page, id, col)).toEqual([...original].sort(byValue).reverse());
+    expect((await ariaSorts(page, id)).filter((s) => s !== null)).toEqual(["descending"]);
+    await page.close();
+  });
+
+  it("sorts fractions by their decimal keys and keeps empty cells last in both directions", async () => {
+    const page = await open("species/sr88/");
+    // sr88's levels table: "gJ (LS, exact)" is a fraction, "—" for the J = 0 levels 1S0 and 3P0.
+    const col = await page.locator("#table-levels thead th").evaluateAll((ths) => ths.findIndex((th) => th.classList.contains("k-fraction")));
+    const keys = await columnKeys(page, "table-levels", col);
+    expect(keys.filter((k) => k === "").length).toBe(2);
+    const values = keys.filter((k) => k !== "").sort(byValue);
+    await headerButton(page, "table-levels", col).click();
+    expect(await columnKeys(page, "table-levels", col)).toEqual([...values, "", ""]);
+    await headerButton(page, "table-levels", col).click();
+    expect(await columnKeys(page, "table-levels", col)).toEqual([...values.reverse(), "", ""]);
+
+    // Zeeman components: strengths are exact fractions such as 1/3 and 1/12 whose text order is wrong.
+    const cmp = "table-cmp:689";
+    const sc = await page.locator(`[id="${cmp}"] thead th`).evaluateAll((ths) => ths.findIndex((th) => th.classList.contains("k-fraction")));
+    const strengths = await columnKeys(page, cmp, sc);
+    await headerButton(page, cmp, sc).click();
+    expect(await columnKeys(page, cmp, sc)).toEqual([...strengths].sort(byValue));
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it("shows a row reached by its anchor even when a filter had hidden it", async () => {
+    const page = await open("species/rb87/");
+    await page.locator('.table-tools[data-for="table-levels"] input').pressSequentially("5s-S1/2");
+    expect(await page.evaluate(() => (document.getElementById("level:5p-P3/2") as HTMLElement).hidden)).toBe(true);
+    await page.evaluate(() => { location.hash = "level:5p-P3/2"; });
+    await page.waitForFunction(() => !(document.getElementById("level:5p-P3/2") as HTMLElement).hidden);
+    await page.close();
+  });
+});
