@@ -44,6 +44,6 @@ describe.skipIf(!hasChromium)("accessibility of every page type (axe-core), with
       expect(bad).toEqual([]);
       expect(problems).toEqual([]);
       await page.close();
-    });
+    }, 300_000); // species pages with field tables hold thousands of rows; axe takes a while on them
   }
 });
