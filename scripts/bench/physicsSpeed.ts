@@ -4,6 +4,10 @@
  * field-insensitive points. A measuring aid for development, not a test:
  * it checks nothing and its numbers depend on the machine.
  *
+ * Columns: one solve; the seven FIELDS; linearValidity; sublevelTransitions
+ * solving the seven fields itself ("lines") and reusing them via
+ * statesAtFields ("lines+r"); total = solve×7 + validity + lines+r, the
+ * per-level analysis of a caller that tabulates those fields anyway.
  * Run: node --import tsx scripts/bench/physicsSpeed.ts [--only NAME] [--repeat N]
  * Profile: node --cpu-prof --import tsx scripts/bench/physicsSpeed.ts
  *
@@ -42,18 +46,21 @@ function time<T>(f: () => T): [T, number] {
   return [r, (d.user + d.system) / 1000];
 }
 
-const ms = (x: number) => x.toFixed(1).padStart(9);
-console.log(`${"level".padEnd(20)}${"solve×1".padStart(9)}${"solve×7".padStart(9)}${"validity".padStart(9)}${"lines".padStart(9)}${"total".padStart(9)}  lines  insensitive points`);
+const ms = (x: number) => x.toFixed(1).padStart(10);
+const heads = ["solve×1", "solve×7", "validity", "lines", "lines+r", "total+r"];
+console.log(`${"level".padEnd(20)}${heads.map((h) => h.padStart(10)).join("")}  lines  insensitive points`);
 for (const { name, level } of LEVELS) {
   if (only && !name.includes(only)) continue;
   for (let r = 0; r < repeat; r++) {
     const solve = hyperfineZeemanSolver(level);
     const [, one] = time(() => solve(dec("0.0123")));
-    const [, seven] = time(() => FIELDS.map((b) => solve(b)));
+    const [states, seven] = time(() => FIELDS.map((b) => solve(b)));
     const [, validity] = time(() => linearValidity(level));
     const [lines, trans] = time(() => sublevelTransitions(level, FIELDS));
+    // as a caller that tabulates the seven fields anyway would call it
+    const [, reuse] = time(() => sublevelTransitions(level, FIELDS, { statesAtFields: states }));
     const points = lines.reduce((n, l) => n + l.fieldInsensitive.length, 0);
-    console.log(`${name.padEnd(20)}${ms(one)}${ms(seven)}${ms(validity)}${ms(trans)}${ms(seven + validity + trans)}  ${String(lines.length).padStart(5)}  ${points}`);
+    console.log(`${name.padEnd(20)}${[one, seven, validity, trans, reuse, seven + validity + reuse].map(ms).join("")}  ${String(lines.length).padStart(5)}  ${points}`);
   }
 }
 console.log("CPU times in ms");

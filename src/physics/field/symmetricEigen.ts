@@ -4,8 +4,9 @@
  * Method: cyclic Jacobi rotations (C. G. J. Jacobi, 1846; rotation formulas
  * as in W. H. Press et al., "Numerical Recipes", 3rd ed., §11.1), which
  * converge unconditionally and quadratically and need no special care for
- * repeated or close eigenvalues. Matrices of width ≤ 2 go straight to Dec
- * Jacobi (one exact rotation). Wider ones are first diagonalized in float64
+ * repeated or close eigenvalues. A 2×2 matrix is solved in closed form
+ * (eigenvalues m ± √(δ² + b²) with one Dec square root; the vectors'
+ * normalization by Newton steps from a float64 start). Wider ones are first diagonalized in float64
  * (symmetricEigenFloat.ts); the float eigenvectors are re-orthonormalized in
  * Dec (modified Gram–Schmidt, the normalization by the series of 1/√(1+x)),
  * the matrix is transformed to that basis in Dec, a = QᵀHQ, and since its
@@ -42,6 +43,8 @@ const MAX_SWEEPS = 60;
 /** Below this |x|, 1/√(1+x) comes from its series instead of a Dec square root. */
 const TINY = new Dec("1e-10");
 const TWO = new Dec("2");
+const HALF = new Dec("0.5");
+const THREE_HALVES = new Dec("1.5");
 /** Largest |a_ij|/|a_ii − a_jj| for the perturbation step: errors ~(ratio)²·|a_ij| in values. */
 const PERTURBATIVE = 1e-14;
 const C = (t: string) => new Dec(t);
@@ -192,6 +195,36 @@ function perturbationStep(a: Dec[][], cols: Dec[][], seed: readonly (readonly nu
   return { values: order.map((i) => values[i]!), vectors: order.map((i) => vectors[i]!) };
 }
 
+/** 1/√x for x > 0: float64 start and two Newton steps y ← y(3 − x·y²)/2, each squaring the relative error (1e-16 → 1e-64). */
+function invSqrt(x: Dec): Dec {
+  let y = new Dec((1 / Math.sqrt(x.toNumber())).toPrecision(17));
+  for (let k = 0; k < 2; k++) y = y.mul(THREE_HALVES.minus(HALF.mul(x).mul(y).mul(y)));
+  return y;
+}
+
+/**
+ * [[a, b], [b, d]] in closed form: values m ∓ R with m = (a + d)/2,
+ * R = √(δ² + b²), δ = (a − d)/2; the upper vector is (R + |δ|, b) (δ ≥ 0) or
+ * (b, R + |δ|) (δ < 0), of squared length 2R(R + |δ|), which avoids
+ * cancellation; the lower one is it turned by 90°. R by a Dec square root,
+ * the normalization by invSqrt.
+ */
+function twoByTwo(a: Dec, b: Dec, d: Dec): SymmetricEigen {
+  if (b.isZero()) {
+    return a.lte(d) ? { values: [a, d], vectors: [[ONE, ZERO], [ZERO, ONE]] } : { values: [d, a], vectors: [[ZERO, ONE], [ONE, ZERO]] };
+  }
+  const delta = a.minus(d).mul(HALF);
+  const m = a.plus(d).mul(HALF);
+  const x = delta.mul(delta).plus(b.mul(b));
+  // R correctly rounded (Dec square root): it sets the eigenvalues, and a Newton root ±1 ulp would
+  // spoil exact zero-field levels; the vector normalization below is fine with invSqrt
+  const R = x.sqrt();
+  const big = R.plus(delta.abs());
+  const w = invSqrt(R.mul(big).mul(2));
+  const upper = delta.isNegative() ? [b.mul(w), big.mul(w)] : [big.mul(w), b.mul(w)];
+  return { values: [m.minus(R), m.plus(R)], vectors: [[upper[1]!.neg(), upper[0]!], upper] };
+}
+
 /**
  * Diagonalize a real symmetric Dec matrix (see the module comment).
  * `floatMatrix`, optional, is the same matrix in float64 when the caller
@@ -204,6 +237,7 @@ export function symmetricEigen(matrix: readonly (readonly Dec[])[], floatMatrix?
   const threshold2 = norm2.mul(STOP).mul(STOP);
   let a: Dec[][];
   let v: Dec[][];
+  if (n === 2) return twoByTwo(matrix[0]![0]!, matrix[0]![1]!, matrix[1]![1]!);
   if (n <= 2) {
     a = matrix.map((row) => row.slice());
     v = a.map((_, i) => a.map((__, j) => (i === j ? ONE : ZERO)));
