@@ -232,13 +232,11 @@ function twoByTwo(a: Dec, b: Dec, d: Dec): SymmetricEigen {
  */
 export function symmetricEigen(matrix: readonly (readonly Dec[])[], floatMatrix?: readonly (readonly number[])[]): SymmetricEigen {
   const n = matrix.length;
-  let norm2 = ZERO;
-  for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) if (!matrix[i]![j]!.isZero()) norm2 = norm2.plus(matrix[i]![j]!.mul(matrix[i]![j]!));
-  const threshold2 = norm2.mul(STOP).mul(STOP);
+  if (n === 1) return { values: [matrix[0]![0]!], vectors: [[ONE]] };
+  if (n === 2) return twoByTwo(matrix[0]![0]!, matrix[0]![1]!, matrix[1]![1]!);
   let a: Dec[][];
   let v: Dec[][];
-  if (n === 2) return twoByTwo(matrix[0]![0]!, matrix[0]![1]!, matrix[1]![1]!);
-  if (n <= 2) {
+  if (n < 2) {
     a = matrix.map((row) => row.slice());
     v = a.map((_, i) => a.map((__, j) => (i === j ? ONE : ZERO)));
   } else {
@@ -264,7 +262,10 @@ export function symmetricEigen(matrix: readonly (readonly Dec[])[], floatMatrix?
     if (quick) return quick;
     v = cols[0]!.map((_, r) => cols.map((col) => col[r]!));
   }
-  jacobiDec(a, v, threshold2);
+  // Jacobi's stopping threshold, relative to the Frobenius norm of the input
+  let norm2 = ZERO;
+  for (let i = 0; i < n; i++) for (let j = 0; j < n; j++) if (!matrix[i]![j]!.isZero()) norm2 = norm2.plus(matrix[i]![j]!.mul(matrix[i]![j]!));
+  jacobiDec(a, v, norm2.mul(STOP).mul(STOP));
   const order = [...Array(n).keys()].sort((i, j) => a[i]![i]!.cmp(a[j]![j]!) || i - j);
   return {
     values: order.map((i) => a[i]![i]!),
