@@ -24,7 +24,10 @@ const self = new Map<number, number>();
 p.samples.forEach((id, i) => self.set(id, (self.get(id) ?? 0) + (p.timeDeltas[i] ?? 0)));
 const total = [...self.values()].reduce((a, b) => a + b, 0);
 
-const short = (url: string): string => url.replace(/^file:\/\//, "").replace(/^.*\/node_modules\//, "npm:").replace(/^.*\/(src|templates|scripts)\//, "$1/");
+const short = (url: string): string => {
+  const u = url.replace(/^file:\/\//, "");
+  return u.includes("/node_modules/") ? u.replace(/^.*\/node_modules\//, "npm:") : u.replace(/^.*\/(src|templates|scripts)\//, "$1/");
+};
 const fn = new Map<string, number>();
 const files = new Map<string, number>();
 for (const [id, us] of self) {
@@ -42,5 +45,20 @@ const show = (title: string, m: Map<string, number>): void => {
     process.stdout.write(`${(us / 1e6).toFixed(2).padStart(8)} s ${((100 * us) / total).toFixed(1).padStart(5)} %  ${k}\n`);
   }
 };
+// Inclusive time of our own functions (src/…): every sample counts once for each distinct one on its stack.
+const parent = new Map<number, number>();
+for (const n of p.nodes) for (const c of n.children ?? []) parent.set(c, n.id);
+const inclusive = new Map<string, number>();
+p.samples.forEach((id, i) => {
+  const seen = new Set<string>();
+  for (let at: number | undefined = id; at !== undefined; at = parent.get(at)) {
+    const n = byId.get(at)!;
+    const where = short(n.callFrame.url);
+    if (!where.startsWith("src/")) continue;
+    seen.add(`${n.callFrame.functionName || "(anonymous)"}  ${where}`);
+  }
+  for (const k of seen) inclusive.set(k, (inclusive.get(k) ?? 0) + (p.timeDeltas[i] ?? 0));
+});
 show("self time by function", fn);
 show("self time by file or package", files);
+show("inclusive time of src/ functions", inclusive);
