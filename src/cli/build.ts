@@ -8,7 +8,9 @@
  * ATLAS_DEBUG=1 (print the stack of an unexpected failure).
  * Test only: ATLAS_FAULT=render (fail after rendering), selfcheck (corrupt
  * the staged site so the self-checks fail), stall (stop before the
- * self-checks and wait to be signalled; prints "stalled" to stderr).
+ * self-checks and wait to be signalled; prints "stalled" to stderr), busy
+ * (spin synchronously before the staging folder exists, as a long
+ * computation does; prints "busy" to stderr).
  * Exit codes: 0 published; 1 input problems or a failed build or
  * self-check (the old output untouched); 130/143 interrupted (SIGINT/SIGTERM).
  */
@@ -39,14 +41,6 @@ async function main(): Promise<void> {
   const buildDate = buildDateFrom(process.env);
   const fault = process.env.ATLAS_FAULT ?? "";
 
-  for (const [sig, code] of [["SIGINT", 130], ["SIGTERM", 143]] as const) {
-    process.on(sig, () => {
-      cleanUp();
-      process.stderr.write(`build interrupted (${sig}); ${out} left as it was\n`);
-      process.exit(code);
-    });
-  }
-
   recoverInterrupted(out);
 
   let atlas;
@@ -57,7 +51,23 @@ async function main(): Promise<void> {
     throw e;
   }
 
+  if (fault === "busy") {
+    // Stands for a long synchronous computation (physics of a large data set).
+    process.stderr.write("busy before staging\n");
+    for (;;);
+  }
   staging = makeStagingDir(out);
+  // Handlers only from here: before it there is nothing to clean up, and the
+  // default action stops a long synchronous computation at once, where a
+  // handler would wait for it to finish.
+  for (const [sig, code] of [["SIGINT", 130], ["SIGTERM", 143]] as const) {
+    process.on(sig, () => {
+      cleanUp();
+      process.stderr.write(`build interrupted (${sig}); ${out} left as it was\n`);
+      process.exit(code);
+    });
+  }
+
   try {
     process.env.ATLAS_DATA = dataDir;
     process.chdir(ROOT);

@@ -94,6 +94,25 @@ describe("an unsuccessful build", () => {
     expect(leftovers()).toEqual([]);
   }, 60_000);
 
+  it("stopped by SIGINT during a long synchronous computation stops at once and leaves the old output", async () => {
+    // A handler installed this early would wait for the computation to end; the default action does not.
+    const r = await runBuild({
+      data,
+      out,
+      env: { ATLAS_FAULT: "busy" },
+      onSpawn: (child) => {
+        let err = "";
+        child.stderr!.on("data", (d) => {
+          err += d;
+          if (err.includes("busy before staging\n")) child.kill("SIGINT");
+        });
+      },
+    });
+    expect(r.signal).toBe("SIGINT");
+    expect(treeHash(out)).toBe(before);
+    expect(leftovers()).toEqual([]);
+  }, 60_000);
+
   it("killed with SIGKILL mid-render leaves the old output, and the next build removes the dead staging folder", async () => {
     // No hook: kill as soon as the real render has started writing into the staging folder.
     const prefix = `.atlas-build-${basename(out)}-`;
