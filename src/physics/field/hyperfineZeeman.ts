@@ -222,6 +222,10 @@ export interface PreparedLevel {
  * Build the field-independent parts of the problem of one level (matrix
  * structure, labels, output order). Used by hyperfineZeemanSolver and by the
  * float twin; exact like the solver's inputs (Dec products of the constants).
+ *
+ * Worked example: 87Rb 5²S1/2 (J = 1/2, I = 3/2) has blocks M = −2 … 2 of
+ * 1, 2, 2, 2, 1 states; the M = 2 state |mJ = 1/2, mI = 3/2⟩ is the last of
+ * the (F, mF) order (outIndex 7).
  */
 export function prepareHyperfineZeeman(level: HyperfineZeemanLevel): PreparedLevel {
   const { I2, J2, gJ, gI, A, muB_h } = level;
@@ -266,7 +270,11 @@ export function prepareHyperfineZeeman(level: HyperfineZeemanLevel): PreparedLev
   return { blocks, size: slots.length, muB_h, floatMuB_h: muB_h.toNumber() };
 }
 
-/** The block's Hamiltonian at Zeeman scale (μB/h)·B, in Dec; off-diagonal rows are shared, not copied. */
+/**
+ * The block's Hamiltonian A·I·J + B·Q + (μB/h)·B·(gJ·Jz + gI·Iz) at Zeeman
+ * scale `scale` = (μB/h)·B, in Dec (exact products). Worked example: the 1×1
+ * block M = 2 of 87Rb 5²S1/2 is [[3A/4 + scale·(gJ/2 + 3gI/2)]].
+ */
 export function blockMatrix(block: PreparedBlock, scale: Dec): Dec[][] {
   return block.hyperfine.map((row, i) => {
     const r = row.slice();
@@ -275,7 +283,7 @@ export function blockMatrix(block: PreparedBlock, scale: Dec): Dec[][] {
   });
 }
 
-/** The same in float64 for field `tesla` (a float, only for seeding and scanning). */
+/** blockMatrix in float64 for `floatScale` = (μB/h)·B as a float; only for seeding and scanning (float-derived). */
 export function blockMatrixFloat(block: PreparedBlock, floatScale: number): number[][] {
   return block.floatHyperfine.map((row, i) => {
     const r = row.slice();
@@ -296,7 +304,10 @@ export function hyperfineZeemanSolver(level: HyperfineZeemanLevel): HyperfineZee
   return solverForPrepared(prepareHyperfineZeeman(level));
 }
 
-/** hyperfineZeemanSolver for a level already prepared (shares the preparation with the float twin). */
+/**
+ * hyperfineZeemanSolver for a level already prepared (shares the preparation
+ * with the float twin); identical results. Worked example: as hyperfineZeemanSolver.
+ */
 export function solverForPrepared(prepared: PreparedLevel): HyperfineZeemanSolver {
   const { muB_h } = prepared;
   return (tesla: Dec): FieldState[] => {

@@ -36,7 +36,7 @@ export interface FloatFieldStates {
   slope: Float64Array;
 }
 
-/** Diagonalize one prepared block at `tesla` in float64. */
+/** Diagonalize one prepared block at `tesla` in float64 (see the module comment and its example). */
 export function solveBlockFloat(prepared: PreparedLevel, block: PreparedBlock, tesla: number): FloatBlockSolution {
   const mu = prepared.floatMuB_h;
   const z = block.floatZeeman;
@@ -53,6 +53,8 @@ export function solveBlockFloat(prepared: PreparedLevel, block: PreparedBlock, t
  * d²E/dB² (Hz/T²) of the block's rank-k state from second-order perturbation
  * theory in the Zeeman operator: 2·Σ_{j≠k} (μB/h)²⟨k|Z|j⟩²/(E_k − E_j),
  * Z = gJ·Jz + gI·Iz. Float64; used to aim Newton steps, not as a result.
+ * Worked example: for the 87Rb clock pair |2, 0⟩, |1, 0⟩ at weak field the
+ * difference of the two is 2 × 575.15 Hz/G² (twice the quadratic coefficient).
  */
 export function curvatureFloat(prepared: PreparedLevel, block: PreparedBlock, sol: FloatBlockSolution, k: number): number {
   const mu = prepared.floatMuB_h;

@@ -2,7 +2,7 @@ import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { EigenvalueDecomposition, Matrix } from "ml-matrix";
 import { Dec, dec } from "../../../src/physics/decimal.js";
-import { solveHyperfineZeeman, type HyperfineZeemanLevel } from "../../../src/physics/field/hyperfineZeeman.js";
+import { blockMatrix, prepareHyperfineZeeman, solveHyperfineZeeman, type HyperfineZeemanLevel } from "../../../src/physics/field/hyperfineZeeman.js";
 import { CS133_6S, K40_4S, RB87_5P32, RB87_5S, muB_h } from "./levels.js";
 
 interface FixtureLevel {
@@ -174,3 +174,13 @@ function floatHamiltonian(lv: HyperfineZeemanLevel, tesla: number): Matrix {
   basis.forEach(([a, b], c) => h.set(c, c, h.get(c, c) + mu * tesla * (gJ * a + gI * b)));
   return h;
 }
+
+describe("blockMatrix", () => {
+  it("gives the 87Rb M = 2 block as [[3A/4 + (μB/h)B(gJ/2 + 3gI/2)]] (doc example)", () => {
+    const block = prepareHyperfineZeeman(RB87_5S).blocks.find((b) => b.M2 === 4)!;
+    const scale = muB_h.mul(dec("0.1"));
+    const m = blockMatrix(block, scale);
+    // 3A/4 (Steck A) + 1399.166608616448099459 MHz at 0.1 T, closed form as in the stretched-state test
+    expect(m[0]![0]!.minus(dec("2563005979.08910875")).minus(dec("1399166608.616448099459")).abs().lt(dec("1e-40"))).toBe(true);
+  });
+});

@@ -58,3 +58,15 @@ describe("hyperfineZeemanFloatSolver", () => {
     expect(Math.abs(f2 / 2 - 575.15)).toBeLessThan(0.01);
   });
 });
+
+describe("prepareHyperfineZeeman", () => {
+  it("splits 87Rb 5²S1/2 into M blocks of 1, 2, 2, 2, 1 states with |1/2, 3/2⟩ last in (F, mF) order (doc example)", () => {
+    const p = prepareHyperfineZeeman(RB87_5S);
+    // M = mJ + mI is conserved: block sizes count the (mJ, mI) pairs with that sum (common practice)
+    expect(p.blocks.map((b) => b.basis.length)).toEqual([1, 2, 2, 2, 1]);
+    const top = p.blocks.find((b) => b.M2 === 4)!;
+    expect(top.basis).toEqual([{ mJ2: 1, mI2: 3 }]);
+    expect(top.outIndex).toEqual([7]);
+    expect(p.size).toBe(8);
+  });
+});
