@@ -64,7 +64,11 @@ export interface SpeciesSheet {
 }
 
 export interface SheetOptions {
-  /** List the shift of each m > 0 (per-species sheet) or only the per-m rule (all-species sheet). */
+  /**
+   * Per-species sheet (true): the shift of each m > 0, and each line's levels
+   * and reading. All-species sheet (false): only the per-m rule, and lines by
+   * id, λ, g_eff and pattern, so nine species share one page.
+   */
   mList: boolean;
 }
 
@@ -128,21 +132,21 @@ export function speciesSheet(s: SpeciesResult, opts: SheetOptions): SpeciesSheet
     csvPath: "",
     columns: [
       { key: "line", label: "line", kind: "text" },
-      { key: "transition", label: "upper → lower", kind: "text" },
+      ...(opts.mList ? [{ key: "transition", label: "upper → lower", kind: "text" as const }] : []),
       { key: "wavelength", label: "λ", unit: "nm", kind: "number" },
       { key: "g_eff", label: "g_eff", kind: "number" },
       { key: "pattern", label: "pattern", kind: "text" },
-      { key: "reading", label: "reading", kind: "text" },
+      ...(opts.mList ? [{ key: "reading", label: "reading", kind: "text" as const }] : []),
     ],
     rows: s.lines.map((ln) => ({
       anchor: `sheet:${lineAnchor(ln.input.id)}`,
       cells: [
         textCell(ln.input.id),
-        textCell(`${ln.upper.input.id} → ${ln.lower.input.id}`),
+        ...(opts.mList ? [textCell(`${ln.upper.input.id} → ${ln.lower.input.id}`)] : []),
         ln.input.wavelength ? wavelengthCell(ln.input.wavelength) : numberCell(null),
         numberCell(ln.gEff, SHEET_DIGITS),
         textCell(ln.pattern ?? "—"),
-        textCell(ln.summary),
+        ...(opts.mList ? [textCell(ln.summary)] : []),
       ],
     })),
   });

@@ -9,7 +9,7 @@ import type { LevelResult, LineResult, SpeciesResult } from "../results/types.js
 import { componentAnchor, hyperfineAnchor, levelAnchor, lineAnchor, mFAnchor, mJAnchor } from "./anchors.js";
 import type { Quantity } from "../data/model.js";
 import {
-  alignTable,
+  alignTable as alignRows,
   type Cell,
   type Column,
   fractionCell,
@@ -89,7 +89,8 @@ export function quantityCell(q: Quantity | null | undefined, unit: string, siPer
   return numberCell(value, writtenDigits(numberText));
 }
 
-export function speciesPage(s: SpeciesResult, csvBase: string): SpeciesPage {
+export function speciesPage(s: SpeciesResult, csvBase: string, exportUrl = `export/${s.input.id}.json`): SpeciesPage {
+  const alignTable = (t: Table): Table => alignRows({ ...t, exportUrl });
   const levels: Table = {
     id: "levels",
     caption: "Levels",

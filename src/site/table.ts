@@ -63,6 +63,8 @@ export interface Table {
   rows: Row[];
   /** CSV file path relative to the site root. */
   csvPath: string;
+  /** The species JSON export holding the same rows (same ids), relative to the site root. */
+  exportUrl?: string;
 }
 
 export const textCell = (text: string, href?: string): Cell => ({ text, sort: text, ...(href ? { href } : {}) });
