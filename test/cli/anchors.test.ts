@@ -9,7 +9,7 @@ import { cpSync } from "node:fs";
 let site: string;
 beforeAll(async () => {
   site = await demoSite();
-});
+}, 600_000);
 
 describe("anchors.json of a build", () => {
   it("lists every HTML page of the build with its ids", () => {

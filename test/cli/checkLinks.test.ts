@@ -38,7 +38,7 @@ function rows(html: string): Map<string, string> {
 let demo: string;
 beforeAll(async () => {
   demo = await demoSite();
-});
+}, 600_000);
 
 describe("check-links against a rebuilt site", () => {
   it("loses no anchor and changes no row when a level is added and levels and lines are reordered", async () => {
@@ -73,7 +73,7 @@ describe("check-links against a rebuilt site", () => {
     const later = rows(readFileSync(join(after, "species/rb87/index.html"), "utf8"));
     expect(before.size).toBeGreaterThan(50);
     for (const [id, html] of before) expect(later.get(id), id).toBe(html);
-  });
+  }, 300_000);
 
   it("reports every anchor of a removed level and exits 1", async () => {
     const data = editedDemo((doc) => {
@@ -93,7 +93,7 @@ describe("check-links against a rebuilt site", () => {
     expect(r.stderr).toContain("species/rb87/index.html#level:5p-P1/2:F=2:mF=-2");
     expect(r.stderr).toContain("species/rb87/index.html#line:D1");
     expect(r.stderr).not.toContain("#line:D2\n");
-  });
+  }, 300_000);
 });
 
 describe("check-links arguments", () => {
