@@ -130,9 +130,10 @@ function main(): void {
   say("site model", `${(Math.max(0, ms("compute") - physics) / 1000).toFixed(2)} s (page models, CSV and JSON text)`);
   say("rendering", `${(Math.max(0, ms("render") - writeMs) / 1000).toFixed(2)} s (Eleventy, less the writing estimate)`);
   say("writing", `${(writeMs / 1000).toFixed(2)} s (estimate: the same files written again)`);
+  say("anchors manifest", `${(ms("anchors") / 1000).toFixed(2)} s`);
   say("self-checks", `${(ms("check") / 1000).toFixed(2)} s`);
   say("publish", `${(ms("publish") / 1000).toFixed(2)} s`);
-  const accounted = ms("load") + ms("compute") + ms("render") + ms("check") + ms("publish");
+  const accounted = ms("load") + ms("compute") + ms("render") + ms("anchors") + ms("check") + ms("publish");
   say("start-up and rest", `${Math.max(0, build.wallS - accounted / 1000).toFixed(2)} s (node, tsx, Eleventy configuration)`);
 
   // The floor: the same rendered files from static templates.

@@ -84,7 +84,7 @@ async function main(): Promise<void> {
       await new Promise(() => setInterval(() => {}, 1 << 30));
     }
     const stagedAt = staging;
-    writeAnchors(stagedAt);
+    timed("anchors", () => writeAnchors(stagedAt));
     const problems = timed("check", () => selfCheck(stagedAt, atlas));
     if (problems.length > 0) {
       throw new BuildStop(`self-check failed; ${out} left as it was:\n${problems.map((p) => `  ${p}`).join("\n")}`);

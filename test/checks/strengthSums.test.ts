@@ -35,3 +35,32 @@ describe("the strength-sum check", () => {
     expect(checkStrengthSums({ lines: [line] }, "x.json")).toEqual(['x.json: line "L" component #1 has strength -1/2, not positive']);
   });
 });
+
+describe("the strength-sum check on hyperfine groups and field tables", () => {
+  const rbLine = (): Record<string, any> => realExport("rb87").lines[1];
+
+  it("accepts the groups and field tables the build makes", () => {
+    const line = rbLine();
+    expect(line.hyperfine_groups.length).toBeGreaterThan(0);
+    expect(line.at_fields.length).toBeGreaterThan(0);
+    expect(checkStrengthSums({ lines: [line] }, "rb87.json")).toEqual([]);
+  });
+
+  it("reports group strengths that do not sum to 1", () => {
+    const line = rbLine();
+    line.hyperfine_groups.pop();
+    expect(checkStrengthSums({ lines: [line] }, "rb87.json").join("\n")).toMatch(/hyperfine group strengths sum to \d+\/\d+, not 1/);
+  });
+
+  it("reports a group whose components miss its strength", () => {
+    const line = rbLine();
+    line.hyperfine_groups[0].components.pop();
+    expect(checkStrengthSums({ lines: [line] }, "rb87.json").join("\n")).toMatch(/hyperfine group #0 components sum to \d+\/\d+, not its strength \d+\/\d+/);
+  });
+
+  it("reports field-table strengths that do not sum to 1 beyond rounding", () => {
+    const line = rbLine();
+    line.at_fields[2].components.pop();
+    expect(checkStrengthSums({ lines: [line] }, "rb87.json").join("\n")).toMatch(/at .+: relative strengths sum to 0\.\d+, not 1/);
+  });
+});
