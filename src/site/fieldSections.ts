@@ -16,7 +16,7 @@ import { formatNumber } from "./format.js";
 import { fieldPlotSvg } from "./plots/fieldPlot.js";
 import { stickPlotSvg } from "./plots/stickPlot.js";
 import { safeFile } from "./speciesPage.js";
-import { type Cell, fractionCell, numberCell, quantumCell, type Table, textCell } from "./table.js";
+import { alignTable, type Cell, fractionCell, numberCell, quantumCell, type Table, textCell } from "./table.js";
 
 const MHZ = new Dec("1e6");
 const GAUSS = new Dec("1e-4");
@@ -207,7 +207,7 @@ function lineSection(ln: LineResult, f: LineFieldResult, csvBase: string): LineF
     .map((a) => {
       const anchor = `line:${id}:B=${exportText(a.field.tesla, 30)}T`;
       const table: Table = {
-        id: `atB:${id}:${a.field.text}`,
+        id: `atB:${id}:${exportText(a.field.tesla, 30)}T`,
         caption: `${id} at ${a.field.text}: components (${a.model})`,
         csvPath: `${csvBase}/line-${safeFile(id)}-B-${safeFile(a.field.text)}.csv`,
         columns: [
@@ -304,11 +304,34 @@ function lineSection(ln: LineResult, f: LineFieldResult, csvBase: string): LineF
   return { lineId: id, anchor: `line:${id}-fields`, atFields, hyperfine, hyperfineComponents };
 }
 
-export function fieldSections(s: SpeciesResult, f: SpeciesFieldResult, fields: ConfiguredField[], csvBase: string): FieldSections {
+export function fieldSections(
+  s: SpeciesResult,
+  f: SpeciesFieldResult,
+  fields: ConfiguredField[],
+  csvBase: string,
+  exportUrl = `export/${s.input.id}.json`,
+): FieldSections {
+  // Every table gets the decimal-point alignment and the JSON download link of the species tables.
+  const finish = (t: Table): Table => alignTable({ ...t, exportUrl });
+  const finishOrNull = (t: Table | null) => (t ? finish(t) : null);
   return {
-    levels: s.levels.map((l) => levelSection(l, f.levels.get(l.input.id)!, fields, csvBase)),
-    terms: f.terms.map((t) => termSection(t, fields, csvBase)),
-    lines: s.lines.map((ln) => lineSection(ln, f.lines.get(ln.input.id)!, csvBase)),
+    levels: s.levels.map((l) => {
+      const sec = levelSection(l, f.levels.get(l.input.id)!, fields, csvBase);
+      return { ...sec, energies: finish(sec.energies), transitions: finishOrNull(sec.transitions) };
+    }),
+    terms: f.terms.map((t) => {
+      const sec = termSection(t, fields, csvBase);
+      return { ...sec, energies: finish(sec.energies) };
+    }),
+    lines: s.lines.map((ln) => {
+      const sec = lineSection(ln, f.lines.get(ln.input.id)!, csvBase);
+      return {
+        ...sec,
+        atFields: sec.atFields.map((a) => ({ ...a, components: finish(a.components) })),
+        hyperfine: finishOrNull(sec.hyperfine),
+        hyperfineComponents: finishOrNull(sec.hyperfineComponents),
+      };
+    }),
   };
 }
 
