@@ -16,8 +16,9 @@
  *
  * Options: --species N, --levels N, --lines N (default 20 levels and 50
  * lines per species), --fields N, --scale X (multiplies species, levels and
- * lines), --profile (also writes a CPU profile of the build into the
- * working folder's bench-profile/), --keep (keep the temporary folders).
+ * lines), --profile (also writes a CPU profile of the build, into
+ * --profile-dir DIR or <tmp>/atlas-bench-profile; summarize it with
+ * scripts/bench/profileTop.ts), --keep (keep the temporary folders).
  */
 import { spawnSync } from "node:child_process";
 import { existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from "node:fs";
@@ -96,7 +97,7 @@ function main(): void {
   const say = (k: string, v: string): void => void process.stdout.write(`${k}: ${v}\n`);
   say("size", `${size.species} species, ${size.levels} levels, ${size.lines} lines, ${size.fields} fields (generated in ${genS.toFixed(1)} s)`);
 
-  const profileDir = join(process.cwd(), "bench-profile");
+  const profileDir = resolve(arg("profile-dir") ?? join(tmpdir(), "atlas-bench-profile"));
   const nodeArgs = [...(flag("profile") ? ["--cpu-prof", `--cpu-prof-dir=${profileDir}`] : []), "--import", "tsx", join(ROOT, "src/cli/build.ts")];
   const build = measured(process.execPath, nodeArgs, { ...process.env, ATLAS_DATA: data, ATLAS_OUT: out, ATLAS_TIMINGS: "1", SOURCE_DATE_EPOCH: "1798761600" }, ROOT);
   if (build.code !== 0) {
