@@ -8,6 +8,7 @@ import { Dec, ZERO } from "../physics/decimal.js";
 import type { ConstantsEdition } from "../physics/constants/constant.js";
 import { val } from "../physics/constants/constant.js";
 import { hyperfineZeemanSolver, type HyperfineZeemanLevel } from "../physics/field/hyperfineZeeman.js";
+import { hyperfineZeemanFloatSolver } from "../physics/field/hyperfineZeemanFloat.js";
 import { quadraticZeemanCoefficient } from "../physics/field/quadraticZeeman.js";
 import { linearValidity } from "../physics/field/validity.js";
 import { sublevelTransitions } from "../physics/field/sublevelTransitions.js";
@@ -41,8 +42,8 @@ import type {
 
 /** Components weaker than this share of the line are not listed (numerical zeros of mixed states). */
 const NEGLIGIBLE = new Dec("1e-20");
-/** Samples per plot axis. */
-const PLOT_POINTS = 25;
+/** Samples per plot axis (float64 solves: plots need no more than pixel accuracy). */
+const PLOT_POINTS = 81;
 
 export interface SpeciesFieldResult {
   levels: Map<string, LevelFieldResult>;
@@ -91,15 +92,16 @@ function levelFields(s: SpeciesResult, l: LevelResult, c: ConstantsEdition, fiel
     quadraticPerTesla2: hasHf ? quadraticZeemanCoefficient(level, st.F2, st.mF2) : null,
   }));
   const grid = hasHf ? plotGrid(fields) : null;
+  const solveFloat = hasHf ? hyperfineZeemanFloatSolver(level) : null;
   const sample = (bs: Dec[]) => {
-    const solved = bs.map((b) => solve(b));
-    return { fields: bs, energies: rows.map((_, i) => solved.map((states) => states[i]!.energy)) };
+    const solved = bs.map((b) => solveFloat!(b.toNumber()));
+    return { fields: bs, energies: rows.map((_, i) => solved.map((states) => states.energy[i]!)) };
   };
   return {
     rows,
     statesAtFields: perField,
     validity: hasHf ? linearValidity(level) : null,
-    transitions: hasHf ? sublevelTransitions(level, fields.map((f) => f.tesla)) : [],
+    transitions: hasHf ? sublevelTransitions(level, fields.map((f) => f.tesla), { statesAtFields: perField }) : [],
     plot: grid ? { linear: sample(grid.linear), log: sample(grid.log) } : null,
   };
 }

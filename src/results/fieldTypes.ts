@@ -35,8 +35,8 @@ export interface LevelFieldResult {
   /** Null for a level without hyperfine structure. */
   validity: LinearValidity | null;
   transitions: SublevelTransition[];
-  /** Energies for the plots: sample fields (T) and one energy list per row. */
-  plot: { linear: { fields: Dec[]; energies: Dec[][] }; log: { fields: Dec[]; energies: Dec[][] } } | null;
+  /** Energies for the plots (float64, plot-only): sample fields (T) and one energy list per row. */
+  plot: { linear: { fields: Dec[]; energies: number[][] }; log: { fields: Dec[]; energies: number[][] } } | null;
 }
 
 /** The fine-structure partners of one LS term treated together (Paschen–Back). */

@@ -113,7 +113,7 @@ function levelSection(l: LevelResult, f: LevelFieldResult, fields: ConfiguredFie
   }
   let plots: LevelFieldSection["plots"] = null;
   if (f.plot) {
-    const curves = (energies: Dec[][]) =>
+    const curves = (energies: readonly (readonly number[])[]) =>
       f.rows.map((r, i) => ({ label: `F=${formatDoubled(r.F2)}, mF=${formatDoubled(r.mF2).replace(/^-/, "−")}`, energies: energies[i]! }));
     const rules = fields.filter((b) => b.tesla.gt(0)).map((b) => ({ tesla: b.tesla, label: b.text }));
     const common = {

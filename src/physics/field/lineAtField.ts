@@ -133,6 +133,14 @@ export function lineComponentsAtField(
     if (v === undefined) reducedCache.set(key, (v = reduced(a, b)));
     return v;
   };
+  // The same few 3j symbols recur for every pair of states: compute each (and its square root) once.
+  const threeJCache = new Map<string, Dec>();
+  const coupling = (Ju2: number, Jl2: number, mu2: number, q2: number, ml2: number): Dec => {
+    const key = `${Ju2},${Jl2},${mu2},${q2},${ml2}`;
+    let v = threeJCache.get(key);
+    if (v === undefined) threeJCache.set(key, (v = signedRootToDec(threeJ(Ju2, 2 * k, Jl2, -mu2, q2, ml2))));
+    return v;
+  };
   const raw: { upper: number; lower: number; q: number; element: Dec }[] = [];
   upper.forEach((u, iu) => {
     lower.forEach((l, il) => {
@@ -142,12 +150,12 @@ export function lineComponentsAtField(
       for (const a of u.amplitudes) {
         for (const b of l.amplitudes) {
           if (a.mI2 !== b.mI2 || a.mJ2 - b.mJ2 !== q2) continue;
-          const w = threeJ(a.J2, 2 * k, b.J2, -a.mJ2, q2, b.mJ2);
-          if (w.sign === 0) continue;
+          const w = coupling(a.J2, b.J2, a.mJ2, q2, b.mJ2);
+          if (w.isZero()) continue;
           const r = red(a.J2, b.J2);
           if (r.isZero()) continue;
           const phase = (a.J2 - a.mJ2) / 2;
-          let term = signedRootToDec(w).mul(r).mul(a.amplitude).mul(b.amplitude);
+          let term = w.mul(r).mul(a.amplitude).mul(b.amplitude);
           if (Math.abs(phase) % 2 === 1) term = term.neg();
           element = element.add(term);
         }

@@ -23,8 +23,8 @@ import {
 export interface FieldCurve {
   /** Direct label, e.g. "F=2, mF=1". */
   label: string;
-  /** Energy E/h in Hz at each field of `fields` (same length). */
-  energies: Dec[];
+  /** Energy E/h in Hz at each field of `fields` (same length); plot-only values may be float64. */
+  energies: readonly (Dec | number)[];
 }
 
 export interface FieldRule {

@@ -24,8 +24,9 @@ export function label(x: number): string {
   return s.startsWith("-") ? "−" + s.slice(1) : s;
 }
 
-export function toNumber(x: Dec): number {
-  return Number(x.toString());
+/** Plot coordinates are float64; plot-only energies may already be float64 (the float solver). */
+export function toNumber(x: Dec | number): number {
+  return typeof x === "number" ? x : x.toNumber();
 }
 
 /** "Nice" linear ticks (steps 1, 2, 5 × 10^n) covering [lo, hi], about `count` of them. */
