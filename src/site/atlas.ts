@@ -8,6 +8,7 @@ import { listConstants } from "../physics/constants/constant.js";
 import { timed } from "../cli/timings.js";
 import { computeSpecies } from "../results/computeSpecies.js";
 import { computeFields, type SpeciesFieldResult } from "../results/computeFields.js";
+import { publicBase } from "./publicBase.js";
 import { fieldSections, fieldTables, type FieldSections } from "./fieldSections.js";
 import type { SpeciesResult } from "../results/types.js";
 import { tableCsv } from "./csv.js";
@@ -41,6 +42,7 @@ export interface SpeciesEntry {
 export interface Atlas {
   title: string;
   lab: string | null;
+  /** Public address of the site root (siteUrl joined with pathPrefix), or null. */
   siteUrl: string | null;
   /** Path prefix when hosted under a sub-path ("/" by default). */
   pathPrefix: string;
@@ -120,7 +122,7 @@ export function buildAtlas(folder: DataFolder, constants: ConstantsEdition, buil
   return {
     title: folder.site.title,
     lab: folder.site.lab,
-    siteUrl: folder.site.siteUrl,
+    siteUrl: publicBase(folder.site.siteUrl, folder.site.pathPrefix),
     pathPrefix: folder.site.pathPrefix,
     build,
     constants,
