@@ -3,7 +3,7 @@ import { join } from "node:path";
 import { AxeBuilder } from "@axe-core/playwright";
 import type { BrowserContext } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { CHROMIUM, hasChromium, launchBrowser, serveStatic, type StaticServer } from "../support/browser.js";
+import { CHROMIUM, hasChromium, launchBrowser, serveStatic, watchPage, type StaticServer } from "../support/browser.js";
 import { demoSite } from "../support/runBuild.js";
 
 if (!hasChromium) console.warn(`browser tests skipped: no Chromium at ${CHROMIUM} (install Debian's chromium package or set CHROMIUM_PATH)`);
@@ -29,10 +29,7 @@ describe.skipIf(!hasChromium)("accessibility of every page type (axe-core), with
     it(`${path} has no serious or critical violations, no console errors and no outside requests`, async (t) => {
       if (!existsSync(join(site, path))) t.skip();
       const page = await ctx.newPage();
-      const problems: string[] = [];
-      page.on("console", (m) => { if (m.type() === "error") problems.push(`console: ${m.text()}`); });
-      page.on("pageerror", (e) => problems.push(`page error: ${e.message}`));
-      page.on("request", (r) => { if (!r.url().startsWith(server.url) && !r.url().startsWith("data:")) problems.push(`request: ${r.url()}`); });
+      const problems = watchPage(page, [server.url, "data:"]);
       await page.goto(server.url + path);
       // With results showing, so the finder's list is checked too.
       await page.locator("#finder-input").pressSequentially("F=2");

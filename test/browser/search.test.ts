@@ -2,20 +2,10 @@ import { pathToFileURL } from "node:url";
 import { join } from "node:path";
 import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { CHROMIUM, hasChromium, launchBrowser, serveStatic, type StaticServer } from "../support/browser.js";
+import { CHROMIUM, hasChromium, launchBrowser, serveStatic, watchPage as watch, type StaticServer } from "../support/browser.js";
 import { demoSite } from "../support/runBuild.js";
 
 if (!hasChromium) console.warn(`browser tests skipped: no Chromium at ${CHROMIUM} (install Debian's chromium package or set CHROMIUM_PATH)`);
-
-/** Console errors, page errors and any request outside `allowed` (prefixes), collected while the page lives. */
-function watch(page: Page, allowed: string[]): string[] {
-  const problems: string[] = [];
-  page.on("console", (m) => { if (m.type() === "error") problems.push(`console: ${m.text()}`); });
-  page.on("pageerror", (e) => problems.push(`page error: ${e.message}`));
-  page.on("response", (r) => { if (r.status() >= 400) problems.push(`HTTP ${r.status()}: ${r.url()}`); });
-  page.on("request", (r) => { if (!allowed.some((a) => r.url().startsWith(a))) problems.push(`request: ${r.url()}`); });
-  return problems;
-}
 
 /** Type a query as a reader would, take the first result, and report where the page landed. */
 async function findAndGo(page: Page, query: string): Promise<{ hash: string; rowId: string | null; visible: boolean; text: string }> {

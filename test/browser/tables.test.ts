@@ -1,7 +1,7 @@
 import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { dec } from "../../src/physics/decimal.js";
-import { CHROMIUM, hasChromium, launchBrowser, serveStatic, type StaticServer } from "../support/browser.js";
+import { CHROMIUM, hasChromium, launchBrowser, serveStatic, watchPage, type StaticServer } from "../support/browser.js";
 import { demoSite } from "../support/runBuild.js";
 
 if (!hasChromium) console.warn(`browser tests skipped: no Chromium at ${CHROMIUM} (install Debian's chromium package or set CHROMIUM_PATH)`);
@@ -39,9 +39,7 @@ describe.skipIf(!hasChromium)("table filter and sort in the browser", () => {
   });
   async function open(path: string): Promise<Page> {
     const page = await ctx.newPage();
-    errors = [];
-    page.on("pageerror", (e) => errors.push(e.message));
-    page.on("console", (m) => { if (m.type() === "error") errors.push(m.text()); });
+    errors = watchPage(page, [server.url, "data:"]);
     await page.goto(server.url + path);
     return page;
   }

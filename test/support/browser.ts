@@ -6,7 +6,7 @@
 import { createServer, type Server } from "node:http";
 import { existsSync, readFileSync, statSync } from "node:fs";
 import { extname, join, normalize } from "node:path";
-import { chromium, type BrowserContext } from "playwright-core";
+import { chromium, type BrowserContext, type Page } from "playwright-core";
 import { tempDir } from "./runBuild.js";
 
 export const CHROMIUM = process.env.CHROMIUM_PATH || "/usr/bin/chromium";
@@ -76,4 +76,24 @@ export async function serveStatic(root: string, prefix = "/"): Promise<StaticSer
     url: `http://127.0.0.1:${port}${prefix}`,
     close: () => new Promise<void>((r) => server.close(() => r())),
   };
+}
+
+/**
+ * Console errors, page errors, HTTP errors and every request whose URL does
+ * not start with one of `allowed`, collected while the page lives; a test
+ * asserts the list is empty.
+ */
+export function watchPage(page: Page, allowed: string[]): string[] {
+  const problems: string[] = [];
+  page.on("console", (m) => {
+    if (m.type() === "error") problems.push(`console: ${m.text()}`);
+  });
+  page.on("pageerror", (e) => problems.push(`page error: ${e.message}`));
+  page.on("response", (r) => {
+    if (r.status() >= 400) problems.push(`HTTP ${r.status()}: ${r.url()}`);
+  });
+  page.on("request", (r) => {
+    if (!allowed.some((a) => r.url().startsWith(a))) problems.push(`request: ${r.url()}`);
+  });
+  return problems;
 }
