@@ -9,6 +9,7 @@ import { timed } from "../cli/timings.js";
 import { computeSpecies } from "../results/computeSpecies.js";
 import { computeFields, type SpeciesFieldResult } from "../results/computeFields.js";
 import { publicBase } from "./publicBase.js";
+import { bohrRule, fieldRules, sheetAddress, speciesSheet } from "./sheet.js";
 import { fieldSections, fieldTables, type FieldSections } from "./fieldSections.js";
 import type { SpeciesResult } from "../results/types.js";
 import { tableCsv } from "./csv.js";
@@ -34,6 +35,9 @@ export interface SpeciesEntry {
   page: SpeciesPage;
   /** Field-dependent sections of the species page. */
   fieldPage: FieldSections;
+  /** The species' own bench sheet (every m listed) and where a printed copy leads back to. */
+  sheet: ReturnType<typeof speciesSheet>;
+  sheetAddress: ReturnType<typeof sheetAddress>;
   /** Pretty-printed JSON export. */
   exportJson: string;
   summary: { levels: number; lines: number; nuclearSpin: string | null };
@@ -53,10 +57,19 @@ export interface Atlas {
   species: SpeciesEntry[];
   /** Every CSV file of the site: path relative to the root, and content. */
   csvFiles: { path: string; content: string }[];
+  /** What every bench sheet shares, and the all-species sheet (compact rows). */
+  sheets: {
+    fields: ReturnType<typeof fieldRules>;
+    bohr: ReturnType<typeof bohrRule>;
+    all: ReturnType<typeof speciesSheet>[];
+    allAddress: ReturnType<typeof sheetAddress>;
+  };
 }
 
 export function buildAtlas(folder: DataFolder, constants: ConstantsEdition, buildDate: string): Atlas {
   const build: BuildInfo = { date: buildDate, constantsEdition: constants.edition, dataVersion: folder.dataVersion };
+  const siteUrl = publicBase(folder.site.siteUrl, folder.site.pathPrefix);
+  const fields = folder.site.fields.map((f) => ({ text: f.text, tesla: f.tesla.toString() }));
   const species = [...folder.species]
     .sort((a, b) => a.id.localeCompare(b.id, "en"))
     .map((input): SpeciesEntry => {
@@ -76,6 +89,8 @@ export function buildAtlas(folder: DataFolder, constants: ConstantsEdition, buil
         fields,
         page,
         fieldPage,
+        sheet: speciesSheet(result, { mList: true }),
+        sheetAddress: sheetAddress(siteUrl, `species/${input.id}/sheet/`),
         exportJson,
         summary: {
           levels: input.levels.length,
@@ -122,13 +137,19 @@ export function buildAtlas(folder: DataFolder, constants: ConstantsEdition, buil
   return {
     title: folder.site.title,
     lab: folder.site.lab,
-    siteUrl: publicBase(folder.site.siteUrl, folder.site.pathPrefix),
+    siteUrl,
     pathPrefix: folder.site.pathPrefix,
     build,
     constants,
     constantsTable,
-    fields: folder.site.fields.map((f) => ({ text: f.text, tesla: f.tesla.toString() })),
+    fields,
     species,
     csvFiles: tables.map((t) => ({ path: t.csvPath, content: tableCsv(t) })),
+    sheets: {
+      fields: fieldRules(fields, constants),
+      bohr: bohrRule(constants),
+      all: species.map((s) => speciesSheet(s.result, { mList: false })),
+      allAddress: sheetAddress(siteUrl, "sheet/"),
+    },
   };
 }
