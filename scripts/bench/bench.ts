@@ -89,6 +89,15 @@ function filler(bytes: number): string {
 function main(): void {
   const size = sizeFromArgs();
   const work = mkdtempSync(join(tmpdir(), "atlas-bench-"));
+  try {
+    run(size, work);
+  } finally {
+    if (flag("keep")) process.stdout.write(`kept: ${work}\n`);
+    else rmSync(work, { recursive: true, force: true });
+  }
+}
+
+function run(size: SyntheticSize, work: string): void {
   const data = join(work, "data");
   const out = join(work, "_site");
   const t0 = performance.now();
@@ -101,8 +110,8 @@ function main(): void {
   const nodeArgs = [...(flag("profile") ? ["--cpu-prof", `--cpu-prof-dir=${profileDir}`] : []), "--import", "tsx", join(ROOT, "src/cli/build.ts")];
   const build = measured(process.execPath, nodeArgs, { ...process.env, ATLAS_DATA: data, ATLAS_OUT: out, ATLAS_TIMINGS: "1", SOURCE_DATE_EPOCH: "1798761600" }, ROOT);
   if (build.code !== 0) {
-    process.stderr.write(build.stderr);
-    throw new Error(`build failed with exit code ${build.code}`);
+    process.stderr.write(build.stderr.slice(-20_000));
+    throw new Error(`build failed with exit code ${build.code} after ${build.wallS.toFixed(1)} s, peak RSS ${build.peakRssMB?.toFixed(0) ?? "unknown"} MB`);
   }
   const t = parseTimings(build.stderr);
   const files = filesUnder(out);
@@ -156,8 +165,6 @@ function main(): void {
   say("floor", `${floorRun.wallS.toFixed(2)} s for ${floorFiles.length} static files, ${floorBytes} bytes (Eleventy, no loops, no physics)`);
   say("ratio to floor", `${(build.wallS / floorRun.wallS).toFixed(2)}`);
   if (flag("profile")) say("profile", profileDir);
-  if (flag("keep")) say("kept", work);
-  else rmSync(work, { recursive: true, force: true });
 }
 
 main();
