@@ -286,6 +286,10 @@
     });
     input.addEventListener("focus", function () { if (input.value.trim()) render(); });
     clear();
+    // Build the index once the page is idle, so the first keystroke is answered at once
+    // (about 0.4 s of work for a 5,000-line atlas, see npm run bench:search).
+    var warm = function () { if (!finder) finder = createFinder(root.AtlasSearchData, root.MiniSearch); };
+    if (root.requestIdleCallback) root.requestIdleCallback(warm, { timeout: 2000 }); else setTimeout(warm, 0);
   }
   if (document.readyState === "loading") document.addEventListener("DOMContentLoaded", init);
   else init();
