@@ -165,7 +165,8 @@ describe("linearPatternLimit", () => {
     const first = roots.reduce((a, b) => (dec(a.tesla).lt(dec(b.tesla)) ? a : b));
     // mpmath fixture: first crossing over all sublevels
     expect([limit.J2, limit.mJ2]).toEqual([first.J2, first.mJ2]);
-    close(limit.tesla, dec(first.tesla), "1e-13");
+    // float-derived search rounded to 7 significant digits (documented: trust about 6)
+    close(limit.tesla, dec(first.tesla), "1e-6");
   });
 
   it("returns null for a term with a single J", () => {
