@@ -3,15 +3,14 @@
  * passthrough copy the templates rely on, registered in one place.
  */
 import { relativeUrl } from "./relativeUrl.js";
+import { rewriteRootLinks } from "./rewriteRootLinks.js";
 import { searchData, searchIndexScript, type SearchSource } from "./searchIndex.js";
 
 // Eleventy's UserConfig has no published types; the few methods used here are typed locally.
 interface EleventyConfigLike {
   addFilter(name: string, fn: (...args: never[]) => unknown): void;
   addPassthroughCopy(map: Record<string, string>): void;
-  htmlTransformer: {
-    addUrlTransform(extensions: string, fn: (this: { url?: string }, url: string) => string, options?: object): void;
-  };
+  addTransform(name: string, fn: (this: { page?: { url?: string | false; outputPath?: string | false } }, content: string) => string): void;
 }
 
 export function atlasPlugin(eleventyConfig: EleventyConfigLike): void {
@@ -21,13 +20,14 @@ export function atlasPlugin(eleventyConfig: EleventyConfigLike): void {
   eleventyConfig.addPassthroughCopy({ "node_modules/minisearch/dist/umd/index.js": "assets/minisearch.js" });
 
   // Every site-root link becomes relative to its page (works from file:// and under any prefix).
-  eleventyConfig.htmlTransformer.addUrlTransform(
-    "html",
-    function (url: string) {
-      return relativeUrl(url, this.url ?? "/");
-    },
-    { priority: -1 },
-  );
+  // A string pass (rewriteRootLinks.ts) rather than Eleventy's HTML-parsing URL transform,
+  // which took about half of a large build.
+  eleventyConfig.addTransform("atlas-relative-links", function (content: string) {
+    const out = this.page?.outputPath;
+    if (typeof out !== "string" || !out.endsWith(".html")) return content;
+    const url = this.page?.url;
+    return rewriteRootLinks(content, typeof url === "string" ? url : "/");
+  });
 
   // A value as JSON for an inline data attribute or script.
   eleventyConfig.addFilter("toJson", (value: never) => JSON.stringify(value));
