@@ -126,51 +126,86 @@ export function lineComponentsAtField(
   k: number,
   reduced: ReducedElement = singleReducedElement,
 ): FieldLineComponent[] {
-  const reducedCache = new Map<string, Dec>();
+  // Integer keys instead of strings: these lookups run once per amplitude.
+  const key3 = (a: number, b: number, c: number) => ((a + 512) * 1024 + (b + 512)) * 1024 + (c + 512);
+  const reducedCache = new Map<number, Dec>();
   const red = (a: number, b: number) => {
-    const key = `${a},${b}`;
+    const key = a * 1024 + b;
     let v = reducedCache.get(key);
     if (v === undefined) reducedCache.set(key, (v = reduced(a, b)));
     return v;
   };
-  // The same few 3j symbols recur for every pair of states: compute each (and its square root) once.
-  const threeJCache = new Map<string, Dec>();
-  const coupling = (Ju2: number, Jl2: number, mu2: number, q2: number, ml2: number): Dec => {
+  // (−1)^(Ju−mJu)·(Ju k Jl; −mJu q mJl)·R(Ju, Jl) for one pair of basis states: a few distinct values recur.
+  const factorCache = new Map<string, Dec>();
+  const factor = (Ju2: number, Jl2: number, mu2: number, q2: number, ml2: number): Dec => {
     const key = `${Ju2},${Jl2},${mu2},${q2},${ml2}`;
-    let v = threeJCache.get(key);
-    if (v === undefined) threeJCache.set(key, (v = signedRootToDec(threeJ(Ju2, 2 * k, Jl2, -mu2, q2, ml2))));
+    let v = factorCache.get(key);
+    if (v === undefined) {
+      const w = signedRootToDec(threeJ(Ju2, 2 * k, Jl2, -mu2, q2, ml2));
+      const r = w.isZero() ? ZERO : red(Ju2, Jl2);
+      v = w.isZero() || r.isZero() ? ZERO : w.mul(r);
+      if (Math.abs((Ju2 - mu2) / 2) % 2 === 1) v = v.neg();
+      factorCache.set(key, v);
+    }
     return v;
   };
+  // Index of the lower basis states (J, mJ, mI) that occur, and the lower J values.
+  const lowerIndex = new Map<number, number>();
+  const lowerJs = new Set<number>();
+  for (const l of lower) {
+    for (const b of l.amplitudes) {
+      const key = key3(b.J2, b.mJ2, b.mI2);
+      if (!lowerIndex.has(key)) lowerIndex.set(key, lowerIndex.size);
+      lowerJs.add(b.J2);
+    }
+  }
+  const nLower = lowerIndex.size;
+  const qs = 2 * k + 1;
+  // Each lower amplitude's basis index, once.
+  const lowerSlots = lower.map((l) => l.amplitudes.map((b) => lowerIndex.get(key3(b.J2, b.mJ2, b.mI2))!));
   const raw: { upper: number; lower: number; q: number; element: Dec }[] = [];
   upper.forEach((u, iu) => {
+    // f[q][b] = Σ over the amplitudes a of u with mI_a = mI_b and mJ_a − mJ_b = q of
+    // c_a·(−1)^(Ju−mJu)(Ju k Jl; −mJu q mJl)·R(Ju, Jl): then ⟨u|T^k_q|l⟩ = Σ_b c_b f[q][b],
+    // one product per lower amplitude instead of one per pair of amplitudes.
+    const f: (Dec | undefined)[] = new Array(qs * nLower);
+    for (const a of u.amplitudes) {
+      for (let q2 = -2 * k; q2 <= 2 * k; q2 += 2) {
+        const ml2 = a.mJ2 - q2;
+        for (const Jl2 of lowerJs) {
+          const slot = lowerIndex.get(key3(Jl2, ml2, a.mI2));
+          if (slot === undefined) continue;
+          const w = factor(a.J2, Jl2, a.mJ2, q2, ml2);
+          if (w.isZero()) continue;
+          const at = ((q2 + 2 * k) / 2) * nLower + slot;
+          const term = w.mul(a.amplitude);
+          const prev = f[at];
+          f[at] = prev === undefined ? term : prev.add(term);
+        }
+      }
+    }
     lower.forEach((l, il) => {
       const q2 = u.M2 - l.M2;
       if (Math.abs(q2) > 2 * k) return;
+      const row = ((q2 + 2 * k) / 2) * nLower;
+      const slots = lowerSlots[il]!;
       let element = ZERO;
-      for (const a of u.amplitudes) {
-        for (const b of l.amplitudes) {
-          if (a.mI2 !== b.mI2 || a.mJ2 - b.mJ2 !== q2) continue;
-          const w = coupling(a.J2, b.J2, a.mJ2, q2, b.mJ2);
-          if (w.isZero()) continue;
-          const r = red(a.J2, b.J2);
-          if (r.isZero()) continue;
-          const phase = (a.J2 - a.mJ2) / 2;
-          let term = w.mul(r).mul(a.amplitude).mul(b.amplitude);
-          if (Math.abs(phase) % 2 === 1) term = term.neg();
-          element = element.add(term);
-        }
-      }
+      l.amplitudes.forEach((b, i) => {
+        const c = f[row + slots[i]!];
+        if (c !== undefined) element = element.add(c.mul(b.amplitude));
+      });
       raw.push({ upper: iu, lower: il, q: q2 / 2, element });
     });
   });
-  const total = raw.reduce((s, r) => s.add(r.element.pow(2)), ZERO);
+  const squares = raw.map((r) => r.element.mul(r.element));
+  const total = squares.reduce((s, x) => s.add(x), ZERO);
   if (total.isZero()) throw new RangeError("no allowed component between these states");
-  return raw.map((r) => ({
+  return raw.map((r, i) => ({
     upper: r.upper,
     lower: r.lower,
     q: r.q,
     polarization: polarizationOf(r.q),
-    strength: r.element.pow(2).div(total),
+    strength: squares[i]!.div(total),
     shift: upper[r.upper]!.energy.sub(lower[r.lower]!.energy),
   }));
 }
