@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { ANCHORS_FORMAT, anchorsManifest, decodeAttribute, lostAnchors, manifestText, parseManifest, scanIds, startTags } from "../../src/site/idScan.js";
+import { ANCHORS_FORMAT, anchorsManifest, decodeAttribute, lostAnchors, manifestText, pageIds, parseManifest, scanIds, startTags } from "../../src/site/idScan.js";
 
 describe("scanIds", () => {
   it("finds ids in double, single and unquoted attributes, in any case", () => {
@@ -21,6 +21,19 @@ describe("scanIds", () => {
     const tags = startTags(`<a title="1 > 0" id="after">x</a>`);
     expect(tags[0]?.attrs.get("id")).toBe("after");
     expect(tags[0]?.attrs.get("title")).toBe("1 > 0");
+  });
+
+  it("ends a script or style only at its own end tag, in any case (HTML raw-text rule)", () => {
+    const html = `<script>if (a</b) x = "<p id='s1'>";</scripts><p id="s2"></SCRIPT ><p id="after"><STYLE>p{}</style><p id="late">`;
+    expect(scanIds(html)).toEqual(["after", "late"]);
+  });
+
+  it("skips the doctype, processing instructions and end tags, and reads an unterminated page to its end", () => {
+    expect(scanIds(`<!DOCTYPE html><?x id="p"?></p id="e"><p id="ok"><p id="cut`)).toEqual(["cut", "ok"]);
+  });
+
+  it("takes the first id of a tag, as a browser does", () => {
+    expect(pageIds(`<p id="first" ID="second"><p id=third>`)).toEqual(["first", "third"]);
   });
 
   it("lists a repeated id once and skips empty ids", () => {
