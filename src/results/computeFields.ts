@@ -7,7 +7,7 @@
 import { Dec, ZERO } from "../physics/decimal.js";
 import type { ConstantsEdition } from "../physics/constants/constant.js";
 import { val } from "../physics/constants/constant.js";
-import { hyperfineZeemanSolver, type HyperfineZeemanLevel } from "../physics/field/hyperfineZeeman.js";
+import { prepareHyperfineZeeman, solverForPrepared, type HyperfineZeemanLevel } from "../physics/field/hyperfineZeeman.js";
 import { hyperfineZeemanFloatSolver } from "../physics/field/hyperfineZeemanFloat.js";
 import { quadraticZeemanCoefficient } from "../physics/field/quadraticZeeman.js";
 import { linearValidity } from "../physics/field/validity.js";
@@ -80,7 +80,9 @@ function plotGrid(fields: ConfiguredField[]): { linear: Dec[]; log: Dec[] } | nu
 
 function levelFields(s: SpeciesResult, l: LevelResult, c: ConstantsEdition, fields: ConfiguredField[]): LevelFieldResult {
   const level = solverLevel(s, l, c);
-  const solve = hyperfineZeemanSolver(level);
+  // one preparation shared by the exact solver and its float64 twin
+  const prepared = prepareHyperfineZeeman(level);
+  const solve = solverForPrepared(prepared);
   const perField = fields.map((f) => solve(f.tesla));
   const hasHf = level.I2 > 0;
   const first = perField[0] ?? solve(ZERO);
@@ -92,7 +94,7 @@ function levelFields(s: SpeciesResult, l: LevelResult, c: ConstantsEdition, fiel
     quadraticPerTesla2: hasHf ? quadraticZeemanCoefficient(level, st.F2, st.mF2) : null,
   }));
   const grid = hasHf ? plotGrid(fields) : null;
-  const solveFloat = hasHf ? hyperfineZeemanFloatSolver(level) : null;
+  const solveFloat = hasHf ? hyperfineZeemanFloatSolver(prepared) : null;
   const sample = (bs: Dec[]) => {
     const solved = bs.map((b) => solveFloat!(b.toNumber()));
     return { fields: bs, energies: rows.map((_, i) => solved.map((states) => states.energy[i]!)) };
@@ -203,11 +205,27 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
     };
   };
 
+  // Line states of a level at a field index, and reduced elements per (Lu, Ll, S, k): shared by all lines.
+  const memo = <T>(cache: Map<string, T>, key: string, make: () => T): T => {
+    let v = cache.get(key);
+    if (v === undefined) cache.set(key, (v = make()));
+    return v;
+  };
+  const fsStates = new Map<string, LineState[]>();
+  const hfStates = new Map<string, LineState[]>();
+  const reducedElements = new Map<string, ReducedElement>();
+  const reducedOf = (Lu: number, Ll: number, S2: number, k: number): ReducedElement =>
+    memo(reducedElements, `${Lu},${Ll},${S2},${k}`, () => {
+      const raw = lsReducedElement(Lu, Ll, S2, k);
+      const values = new Map<string, Dec>();
+      return (Ju2, Jl2) => memo(values, `${Ju2},${Jl2}`, () => raw(Ju2, Jl2));
+    });
+
   const lineResult = (ln: LineResult): LineFieldResult => {
     const u = ln.upper;
     const l = ln.lower;
     const hfBoth = s.I2 > 0 && u.input.hyperfine !== null && l.input.hyperfine !== null;
-    const atFields = fields.map((f): LineAtFieldResult => {
+    const atFields = fields.map((f, at): LineAtFieldResult => {
       const ru = regimeOf(u, f.tesla);
       const rl = regimeOf(l, f.tesla);
       const beyondLinear = (r: Regime) => r === "intermediate" || r === "Paschen–Back";
@@ -217,12 +235,13 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
       const sameS = u.input.term.S2 === l.input.term.S2;
       const regime = stronger(stronger(ru.hf, rl.hf), stronger(ru.fs, rl.fs));
       if (fsMatters && (tu || tl) && sameS && ln.input.multipole !== "M1") {
-        const statesOf = (lv: LevelResult, t: TermFieldResult | undefined) => {
-          if (!t) return isolatedStates(lv, f.tesla, muB_h);
-          const all = t.atFields[fields.indexOf(f)]!.filter((st) => st.J2 === lv.J2);
-          return statesFromFineStructure(all, lv.input.energy!.si);
-        };
-        const reduced = lsReducedElement(u.input.term.L, l.input.term.L, u.input.term.S2, ln.k);
+        const statesOf = (lv: LevelResult, t: TermFieldResult | undefined) =>
+          memo(fsStates, `${lv.input.id}\u0000${at}`, () => {
+            if (!t) return isolatedStates(lv, f.tesla, muB_h);
+            const all = t.atFields[at]!.filter((st) => st.J2 === lv.J2);
+            return statesFromFineStructure(all, lv.input.energy!.si);
+          });
+        const reduced = reducedOf(u.input.term.L, l.input.term.L, u.input.term.S2, ln.k);
         return {
           field: f,
           regime,
@@ -231,14 +250,13 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
         };
       }
       if (hfBoth) {
-        const at = fields.indexOf(f);
-        const su = levels.get(u.input.id)!.statesAtFields[at]!;
-        const sl = levels.get(l.input.id)!.statesAtFields[at]!;
+        const statesOf = (lv: LevelResult) =>
+          memo(hfStates, `${lv.input.id}\u0000${at}`, () => statesFromHyperfine(lv.J2, levels.get(lv.input.id)!.statesAtFields[at]!));
         return {
           field: f,
           regime,
           model: "hyperfine–Zeeman eigenstates",
-          components: componentsOf(statesFromHyperfine(u.J2, su), statesFromHyperfine(l.J2, sl), ln.k, singleReducedElement),
+          components: componentsOf(statesOf(u), statesOf(l), ln.k, singleReducedElement),
         };
       }
       return {
