@@ -22,7 +22,7 @@
  * M1 the spin part of the operator is not covered (the caller gives its own
  * reduced elements then).
  */
-import { Dec, ZERO } from "../decimal.js";
+import { Dec, ONE, ZERO } from "../decimal.js";
 import { Rational } from "../rational.js";
 import { threeJ, sixJ, type SignedRoot } from "../wigner.js";
 import type { Polarization } from "../linePattern.js";
@@ -200,12 +200,14 @@ export function lineComponentsAtField(
   const squares = raw.map((r) => r.element.mul(r.element));
   const total = squares.reduce((s, x) => s.add(x), ZERO);
   if (total.isZero()) throw new RangeError("no allowed component between these states");
+  // one division, then products: a Dec division costs several multiplications
+  const inverse = ONE.div(total);
   return raw.map((r, i) => ({
     upper: r.upper,
     lower: r.lower,
     q: r.q,
     polarization: polarizationOf(r.q),
-    strength: squares[i]!.div(total),
+    strength: squares[i]!.mul(inverse),
     shift: upper[r.upper]!.energy.sub(lower[r.lower]!.energy),
   }));
 }
