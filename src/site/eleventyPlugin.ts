@@ -4,6 +4,7 @@
  */
 import { relativeUrl } from "./relativeUrl.js";
 import { rewriteRootLinks } from "./rewriteRootLinks.js";
+import { sortKey } from "./sortKey.js";
 import { searchData, searchIndexScript, type SearchSource } from "./searchIndex.js";
 
 // Eleventy's UserConfig has no published types; the few methods used here are typed locally.
@@ -28,6 +29,9 @@ export function atlasPlugin(eleventyConfig: EleventyConfigLike): void {
     const url = this.page?.url;
     return rewriteRootLinks(content, typeof url === "string" ? url : "/");
   });
+
+  // A table cell's data-sort value, or false where its text gives the same key.
+  eleventyConfig.addFilter("sortKey", (cell: never, kind: never) => sortKey(cell, kind));
 
   // A value as JSON for an inline data attribute or script.
   eleventyConfig.addFilter("toJson", (value: never) => JSON.stringify(value));

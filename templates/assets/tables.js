@@ -25,9 +25,11 @@
   }
   /** Text as the filter and the sort see it: true minus and thin spaces folded. */
   function plain(s) { return s.replace(/\u2212/g, "-").replace(/[\u2009\u202f\u00a0]/g, "").trim(); }
+  /** A cell's sort key: data-sort, else its text with thin and no-break spaces dropped ("—" is empty).
+      The page writes data-sort only where that would differ (src/site/sortKey.ts mirrors this). */
   function sortText(td) {
     var s = td.getAttribute("data-sort");
-    if (s === null) { s = plain(td.textContent); if (s === "—") s = ""; }
+    if (s === null) { s = td.textContent.replace(/[\u2009\u202f\u00a0]/g, "").trim(); if (s === "—") s = ""; }
     return s;
   }
 

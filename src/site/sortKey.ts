@@ -1,0 +1,49 @@
+/**
+ * The data-sort attribute of a table cell, written only where the browser
+ * could not read the same key from the cell's text (templates/assets/tables.js
+ * falls back to the text, folded the same way as `shownKey` below). Numeric
+ * keys are cut to SORT_DIGITS significant digits in the page; the CSV and
+ * the JSON export keep the full `sort` of the cell.
+ */
+import { dec, exportText } from "../physics/decimal.js";
+import type { Cell, ColumnKind } from "./table.js";
+
+/**
+ * 17 significant digits: more than any number is shown with (at most 12
+ * in the tables), so rounding, which never reverses an order, can only
+ * tie values that already look the same; the sort keeps their page order.
+ */
+export const SORT_DIGITS = 17;
+
+/** The cell's text as the reader's browser has it (textContent of the macro's markup). */
+export function shownText(c: Cell, kind: ColumnKind): string {
+  if (kind === "term" && c.term) return c.term.multiplicity + c.term.letter + (c.term.parity ? "o" : "") + c.term.J;
+  if (c.href) return c.text;
+  if (c.parts) {
+    const p = c.parts;
+    return (c.fraction ? `${c.fraction.text} ${c.fraction.rel} ` : "") + p.sign + p.int + p.frac + (p.unc ?? "") + p.exp + (p.pad ?? "");
+  }
+  return c.text;
+}
+
+/**
+ * What tables.js sorts a cell without data-sort by: its text with thin and
+ * no-break spaces dropped and trimmed (String.prototype.trim also drops the
+ * figure and punctuation spaces of the padding); "—" is empty. The true
+ * minus is kept, so a label such as "mF=−1" is its own key.
+ */
+export function shownKey(text: string): string {
+  const s = text.replace(/[\u2009\u202f\u00a0]/g, "").trim();
+  return s === "—" ? "" : s;
+}
+
+const DECIMAL = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
+
+/** The data-sort value to write, or false where the cell's text gives the same key. */
+export function sortKey(c: Cell, kind: ColumnKind): string | false {
+  if (shownKey(shownText(c, kind)) === c.sort) return false;
+  if (DECIMAL.test(c.sort) && c.sort.replace(/e.*$/i, "").replace(/\D/g, "").replace(/^0+/, "").length > SORT_DIGITS) {
+    return exportText(dec(c.sort), SORT_DIGITS);
+  }
+  return c.sort;
+}
