@@ -78,7 +78,9 @@ function plotGrid(fields: ConfiguredField[]): { linear: Dec[]; log: Dec[] } | nu
   return { linear, log };
 }
 
-function levelFields(s: SpeciesResult, l: LevelResult, c: ConstantsEdition, fields: ConfiguredField[]): LevelFieldResult {
+type PlotGrid = ReturnType<typeof plotGrid>;
+
+function levelFields(s: SpeciesResult, l: LevelResult, c: ConstantsEdition, fields: ConfiguredField[], plotFields: PlotGrid): LevelFieldResult {
   const level = solverLevel(s, l, c);
   // one preparation shared by the exact solver and its float64 twin
   const prepared = prepareHyperfineZeeman(level);
@@ -93,7 +95,7 @@ function levelFields(s: SpeciesResult, l: LevelResult, c: ConstantsEdition, fiel
     energies: perField.map((states) => states[i]!.energy),
     quadraticPerTesla2: hasHf ? quadraticZeemanCoefficient(level, st.F2, st.mF2) : null,
   }));
-  const grid = hasHf ? plotGrid(fields) : null;
+  const grid = hasHf ? plotFields : null;
   const solveFloat = hasHf ? hyperfineZeemanFloatSolver(prepared) : null;
   const sample = (bs: Dec[]) => {
     const solved = bs.map((b) => solveFloat!(b.toNumber()));
@@ -191,7 +193,9 @@ function componentsOf(upper: LineState[], lower: LineState[], k: number, reduced
 
 export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: ConfiguredField[]): SpeciesFieldResult {
   const muB_h = val(c.muB_h);
-  const levels = new Map(s.levels.map((l) => [l.input.id, levelFields(s, l, c, fields)]));
+  // the plot fields depend on the configured fields only: one grid for every level
+  const grid = plotGrid(fields);
+  const levels = new Map(s.levels.map((l) => [l.input.id, levelFields(s, l, c, fields, grid)]));
   const terms = fineStructureTerms(s, c, fields);
   const termOf = new Map<string, TermFieldResult>();
   for (const t of terms) for (const id of t.levelIds) termOf.set(id, t);
