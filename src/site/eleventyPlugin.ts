@@ -4,7 +4,8 @@
  */
 import { relativeUrl } from "./relativeUrl.js";
 import { rewriteRootLinks } from "./rewriteRootLinks.js";
-import { sortKey } from "./sortKey.js";
+import { tableRowsHtml } from "./tableRows.js";
+import type { Table } from "./table.js";
 import { searchData, searchIndexScript, type SearchSource } from "./searchIndex.js";
 
 // Eleventy's UserConfig has no published types; the few methods used here are typed locally.
@@ -30,8 +31,8 @@ export function atlasPlugin(eleventyConfig: EleventyConfigLike): void {
     return rewriteRootLinks(content, typeof url === "string" ? url : "/");
   });
 
-  // A table cell's data-sort value, or false where its text gives the same key.
-  eleventyConfig.addFilter("sortKey", (cell: never, kind: never) => sortKey(cell, kind));
+  // The <tr> rows of a table model, as HTML (output with | safe; every value escaped inside).
+  eleventyConfig.addFilter("tableRows", (table: Table) => tableRowsHtml(table));
 
   // A value as JSON for an inline data attribute or script.
   eleventyConfig.addFilter("toJson", (value: never) => JSON.stringify(value));
