@@ -14,8 +14,8 @@ import { linearValidity } from "../physics/field/validity.js";
 import { sublevelTransitions } from "../physics/field/sublevelTransitions.js";
 import {
   fitSpinOrbit,
+  fineStructureSolver,
   linearPatternLimit,
-  solveFineStructure,
   type FineStructureTerm,
 } from "../physics/field/fineStructure.js";
 import {
@@ -135,6 +135,8 @@ function fineStructureTerms(s: SpeciesResult, c: ConstantsEdition, fields: Confi
       gS: s.gS,
       muB_h: val(c.muB_h),
     };
+    // bases, Clebsch–Gordan products and Zeeman diagonal prepared once for all configured fields
+    const solveAt = fineStructureSolver(term);
     const energies = levels.map((l) => l.input.energy!.si).sort((a, b) => a.cmp(b));
     let interval = ZERO;
     for (let i = 1; i < energies.length; i++) interval = Dec.max(interval, energies[i]!.sub(energies[i - 1]!));
@@ -146,7 +148,7 @@ function fineStructureTerms(s: SpeciesResult, c: ConstantsEdition, fields: Confi
       L,
       fit: fitSpinOrbit(term),
       limit: linearPatternLimit(term),
-      atFields: fields.map((f) => solveFineStructure(term, f.tesla)),
+      atFields: fields.map((f) => solveAt(f.tesla)),
       paschenBackTesla: interval.isZero() ? null : interval.div(val(c.muB_h)),
     });
   }

@@ -188,55 +188,74 @@ function blockBasis(L: number, S2: number, M2: number): { mL2: number; mS2: numb
  * (J = 1/2, mJ = 1/2) to |mL = 1, mS = −1/2⟩ at c + (μB/h)B(gL − gS/2) − ζ/2.
  */
 export function solveFineStructure(term: FineStructureTerm, tesla: Dec): FineStructureState[] {
+  return fineStructureSolver(term)(tesla);
+}
+
+/**
+ * solveFineStructure with the field-independent work done once: validation,
+ * block bases, Clebsch–Gordan coefficients, the products E_J·CG·CG and the
+ * Zeeman diagonal. The returned function gives exactly what
+ * solveFineStructure(term, tesla) gives (same operations in the same order),
+ * for callers that solve one term at several fields. Exact: no (as there).
+ *
+ * Worked example: fineStructureSolver(na3p)(B) equals
+ * solveFineStructure(na3p, B) state by state (test).
+ */
+export function fineStructureSolver(term: FineStructureTerm): (tesla: Dec) => FineStructureState[] {
   const byJ = validate(term);
   const Js = [...byJ.keys()];
-  const zeeman = term.muB_h.mul(tesla);
-  const out: FineStructureState[] = [];
   const jMax = Math.max(...Js);
-  for (const M2 of mValues(jMax)) {
+  const blocks = mValues(jMax).map((M2) => {
     const basis = blockBasis(term.L, term.S2, M2);
     const blockJs = Js.filter((j) => j >= Math.abs(M2)).sort((a, b) => byJ.get(a)!.cmp(byJ.get(b)!) || a - b);
     const cg = blockJs.map((j) => basis.map((b) => clebsch(term.L, term.S2, j, b.mL2, b.mS2, M2)));
     const diag = basis.map((b) => term.gL.mul(b.mL2).add(term.gS.mul(b.mS2)).div(2));
-    const h: Dec[][] = basis.map((_, r) =>
-      basis.map((__, c) => {
-        let x = r === c ? zeeman.mul(diag[r]!) : ZERO;
-        blockJs.forEach((j, n) => {
-          x = x.add(byJ.get(j)!.mul(cg[n]![r]!).mul(cg[n]![c]!));
+    // E_J·CG(r)·CG(c) per entry, in the order they are added
+    const terms = basis.map((_, r) => basis.map((__, c) => blockJs.map((j, n) => byJ.get(j)!.mul(cg[n]![r]!).mul(cg[n]![c]!))));
+    return { M2, basis, blockJs, cg, diag, terms };
+  });
+  return (tesla: Dec) => {
+    const zeeman = term.muB_h.mul(tesla);
+    const out: FineStructureState[] = [];
+    for (const { M2, basis, blockJs, cg, diag, terms } of blocks) {
+      const h: Dec[][] = basis.map((_, r) =>
+        basis.map((__, c) => {
+          let x = r === c ? zeeman.mul(diag[r]!) : ZERO;
+          for (const t of terms[r]![c]!) x = x.add(t);
+          return x;
+        }),
+      );
+      const pairs = symmetricEigen(h);
+      const highOrder = basis
+        .map((b, i) => ({ b, key: diag[i]! }))
+        .sort((x, y) => (tesla.isNeg() ? y.key.cmp(x.key) : x.key.cmp(y.key)));
+      pairs.forEach((pair, n) => {
+        const J2 = blockJs[n]!;
+        const high = highOrder[n]!.b;
+        let coupled = blockJs.map((j, jn) => ({
+          J2: j,
+          amplitude: cg[jn]!.reduce((s, c, i) => s.add(c.mul(pair.vector[i]!)), ZERO),
+        }));
+        let vector = pair.vector;
+        if (coupled[n]!.amplitude.isNeg()) {
+          vector = vector.map((x) => x.neg());
+          coupled = coupled.map((c) => ({ J2: c.J2, amplitude: c.amplitude.neg() }));
+        }
+        coupled.sort((a, b) => a.J2 - b.J2);
+        out.push({
+          mJ2: M2,
+          J2,
+          mL2: high.mL2,
+          mS2: high.mS2,
+          energy: pair.value,
+          shift: pair.value.sub(byJ.get(J2)!),
+          uncoupled: basis.map((b, i) => ({ mL2: b.mL2, mS2: b.mS2, amplitude: vector[i]! })),
+          coupled,
         });
-        return x;
-      }),
-    );
-    const pairs = symmetricEigen(h);
-    const highOrder = basis
-      .map((b, i) => ({ b, key: diag[i]! }))
-      .sort((x, y) => (tesla.isNeg() ? y.key.cmp(x.key) : x.key.cmp(y.key)));
-    pairs.forEach((pair, n) => {
-      const J2 = blockJs[n]!;
-      const high = highOrder[n]!.b;
-      let coupled = blockJs.map((j, jn) => ({
-        J2: j,
-        amplitude: cg[jn]!.reduce((s, c, i) => s.add(c.mul(pair.vector[i]!)), ZERO),
-      }));
-      let vector = pair.vector;
-      if (coupled[n]!.amplitude.isNeg()) {
-        vector = vector.map((x) => x.neg());
-        coupled = coupled.map((c) => ({ J2: c.J2, amplitude: c.amplitude.neg() }));
-      }
-      coupled.sort((a, b) => a.J2 - b.J2);
-      out.push({
-        mJ2: M2,
-        J2,
-        mL2: high.mL2,
-        mS2: high.mS2,
-        energy: pair.value,
-        shift: pair.value.sub(byJ.get(J2)!),
-        uncoupled: basis.map((b, i) => ({ mL2: b.mL2, mS2: b.mS2, amplitude: vector[i]! })),
-        coupled,
       });
-    });
-  }
-  return out.sort((a, b) => a.J2 - b.J2 || a.mJ2 - b.mJ2);
+    }
+    return out.sort((a, b) => a.J2 - b.J2 || a.mJ2 - b.mJ2);
+  };
 }
 
 /** Where the linear J-resolved pattern stops describing the term. */
