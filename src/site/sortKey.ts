@@ -1,5 +1,6 @@
 /**
- * The data-sort attribute of a table cell, written only where the browser
+ * The data-sort attribute of a table cell: always in number, fraction and
+ * quantum columns, and in text and term columns only where the browser
  * could not read the same key from the cell's text (templates/assets/tables.js
  * falls back to the text, folded the same way as `shownKey` below). Numeric
  * keys are cut to SORT_DIGITS significant digits in the page; the CSV and
@@ -37,11 +38,15 @@ export function shownKey(text: string): string {
   return s === "—" ? "" : s;
 }
 
+const NUMERIC_KINDS = new Set<ColumnKind>(["number", "fraction", "quantum"]);
+
 const DECIMAL = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
 
 /** The data-sort value to write, or false where the cell's text gives the same key. */
 export function sortKey(c: Cell, kind: ColumnKind): string | false {
-  if (shownKey(shownText(c, kind)) === c.sort) return false;
+  // Number, fraction and quantum columns always carry their keys: the page's own tests and
+  // readers' scripts read a numeric column's values from data-sort.
+  if (!NUMERIC_KINDS.has(kind) && shownKey(shownText(c, kind)) === c.sort) return false;
   if (DECIMAL.test(c.sort) && c.sort.replace(/e.*$/i, "").replace(/\D/g, "").replace(/^0+/, "").length > SORT_DIGITS) {
     return exportText(dec(c.sort), SORT_DIGITS);
   }

@@ -5,16 +5,21 @@ import { fractionCell, numberCell, quantumCell, termCell, textCell } from "../..
 import { SORT_DIGITS, shownKey, shownText, sortKey } from "../../src/site/sortKey.js";
 
 describe("sortKey", () => {
-  it("writes no data-sort where the cell's text gives the same key", () => {
+  it("writes no data-sort in a text or term column where the cell's text gives the same key", () => {
     expect(sortKey(textCell("measured"), "text")).toBe(false);
     expect(sortKey(textCell("5p-P3/2", "species/rb87/#level:5p-P3/2"), "text")).toBe(false);
-    // 84.718 5 with a thin space between digit groups (common practice: SI digit grouping).
-    expect(sortKey(numberCell(dec("84.7185"), 6), "number")).toBe(false);
     // tables.js keeps the true minus (U+2212) of a label, so the label is its own key.
     expect(sortKey(textCell("F=1, mF=\u22121"), "text")).toBe(false);
     // ²P°₃/₂ reads "2Po3/2" as text, the same as its key.
     expect(sortKey(termCell({ text: "2Po3/2", multiplicity: 2, letter: "P", parity: "odd", J2: 3 }), "term")).toBe(false);
-    expect(sortKey(numberCell(null), "number")).toBe(false);
+    expect(sortKey(textCell("—"), "text")).toBe("—");
+  });
+
+  it("always writes data-sort in number, fraction and quantum columns, even where the text would do", () => {
+    // 84.718 5 with a thin space between digit groups (common practice: SI digit grouping).
+    expect(sortKey(numberCell(dec("84.7185"), 6), "number")).toBe("84.7185");
+    expect(sortKey(numberCell(null), "number")).toBe("");
+    expect(sortKey(fractionCell(null), "fraction")).toBe("");
   });
 
   it("keeps data-sort where text and key differ: quantum numbers, negative numbers, rounded numbers", () => {
