@@ -26,7 +26,11 @@ export function htmlFiles(root: string): string[] {
 
 /** Scan the pages of `siteDir` and write `siteDir/anchors.json`; returns the manifest. */
 export function writeAnchors(siteDir: string): AnchorsManifest {
-  const manifest = anchorsManifest(htmlFiles(siteDir).map((p) => [p, readFileSync(join(siteDir, p), "utf8")] as [string, string]));
+  // Pages read lazily, one at a time: a large site's HTML is never all in memory at once.
+  function* pages(): Generator<[string, string]> {
+    for (const p of htmlFiles(siteDir)) yield [p, readFileSync(join(siteDir, p), "utf8")];
+  }
+  const manifest = anchorsManifest(pages());
   writeFileSync(join(siteDir, ANCHORS_FILE), manifestText(manifest));
   return manifest;
 }

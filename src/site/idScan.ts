@@ -201,7 +201,10 @@ export interface AnchorsManifest {
 
 /** The manifest of a set of pages (path → HTML), pages and ids sorted. */
 export function anchorsManifest(pages: Iterable<[path: string, html: string]>): AnchorsManifest {
-  const entries = [...pages].map(([path, html]) => [path, scanIds(html)] as const).sort((a, b) => byCodePoint(a[0], b[0]));
+  // One page at a time, so a lazy iterable never holds more than one page's text.
+  const entries: [string, string[]][] = [];
+  for (const [path, html] of pages) entries.push([path, scanIds(html)]);
+  entries.sort((a, b) => byCodePoint(a[0], b[0]));
   return { format: ANCHORS_FORMAT, pages: Object.fromEntries(entries) };
 }
 
