@@ -18,7 +18,9 @@
  *
  * H conserves mJ = mL + mS, so it splits into blocks of at most
  * 2·min(L, S) + 1 states, each diagonalized by Jacobi rotations in Dec
- * (fineStructureEigen.ts).
+ * (fineStructureEigen.ts). Only the search for the linear-pattern limit uses
+ * the float64 twin (fineStructureFloat.ts): it needs many solves and returns
+ * a threshold, not an energy.
  *
  * Hyperfine structure is left out. That is fine when the hyperfine
  * splittings (A·(I+1/2)… typically MHz to a few GHz) are small against both

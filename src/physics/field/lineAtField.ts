@@ -113,6 +113,9 @@ export function lsReducedElement(Lu: number, Ll: number, S2: number, k: number):
  * that vanish or nearly vanish, so that "forbidden at zero field, allowed at
  * field" components stay visible); δ(mI) because T^k does not act on the nucleus.
  * Exact: no (Dec sums of products of eigenvector components).
+ * Method: for each upper state and q the 3j·R-weighted sums of its
+ * amplitudes are formed once per lower basis state |Jl mJl mI⟩, so a pair of
+ * states costs one product per lower amplitude.
  * Sum rules (tested): with complete state sets of both levels, the strengths
  * of each q sum to 1/(2k+1) at every field, and the strength-weighted mean
  * shift of each q is linear in B (both are traces, independent of the basis).
