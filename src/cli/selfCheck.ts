@@ -4,14 +4,15 @@
  * the build may go live. They read the staged files, not the models the
  * pages were made from, so what is checked is what would be published.
  */
-import { existsSync, readdirSync, readFileSync } from "node:fs";
-import { join, relative, sep } from "node:path";
+import { existsSync, readFileSync } from "node:fs";
+import { join } from "node:path";
 import { checkExportSchema } from "../checks/exportSchema.js";
 import { checkFiniteNumbers } from "../checks/finiteNumbers.js";
 import { checkLineReferences } from "../checks/lineReferences.js";
 import { checkStrengthSums } from "../checks/strengthSums.js";
 import { checkUniqueAnchors } from "../checks/uniqueAnchors.js";
 import type { Atlas } from "../site/atlas.js";
+import { htmlFiles } from "./anchors.js";
 
 /** Every check of one parsed export. */
 export function checkExport(value: unknown, file: string): string[] {
@@ -21,20 +22,6 @@ export function checkExport(value: unknown, file: string): string[] {
     ...checkFiniteNumbers(value, file),
     ...checkLineReferences(value, file),
   ];
-}
-
-/** Files under `root` whose name ends in `ext`, as sorted "/"-separated relative paths. */
-function filesEnding(root: string, ext: string): string[] {
-  const out: string[] = [];
-  const walk = (dir: string): void => {
-    for (const e of readdirSync(dir, { withFileTypes: true })) {
-      const p = join(dir, e.name);
-      if (e.isDirectory()) walk(p);
-      else if (e.isFile() && e.name.endsWith(ext)) out.push(relative(root, p).split(sep).join("/"));
-    }
-  };
-  walk(root);
-  return out.sort();
 }
 
 export function selfCheck(staging: string, atlas: Pick<Atlas, "species">): string[] {
@@ -54,7 +41,7 @@ export function selfCheck(staging: string, atlas: Pick<Atlas, "species">): strin
     }
     problems.push(...checkExport(value, s.exportUrl));
   }
-  const pages = filesEnding(staging, ".html");
+  const pages = htmlFiles(staging).sort();
   if (pages.length === 0) problems.push("no HTML pages were written");
   for (const page of pages) problems.push(...checkUniqueAnchors(readFileSync(join(staging, page), "utf8"), page));
   return problems;
