@@ -2,7 +2,7 @@
  * One species file → SpeciesInput. Every problem goes to the file's sink;
  * the species is returned only when the file has none.
  */
-import { isMap, type Node, type YAMLMap } from "yaml";
+import { isMap, type Node, type YAMLMap, type YAMLSeq } from "yaml";
 import { parseDoubled } from "../physics/quantum.js";
 import { didYouMean, nearest } from "./didYouMean.js";
 import { ITEM_ID, ITEM_ID_HINT, SPECIES_ID, SPECIES_ID_HINT, suggestSpeciesId } from "./ids.js";
@@ -148,22 +148,32 @@ class SpeciesReader {
       this.add(this.src.place(seq), "levels is empty", "list at least one level, each starting with '- id: ...'");
       return null;
     }
-    const out = new Map<string, LevelInput>();
+    const levels = this.uniqueItems(seq, "level", "id, config, term, source, ...", (item) => this.level(item, nucleus));
+    return new Map(levels.map((l) => [l.id, l]));
+  }
+
+  /**
+   * The items of a levels or lines list, each read with `read`, in file
+   * order. An item that is not a map, or whose id an earlier item already
+   * has, is reported and left out.
+   */
+  private uniqueItems<T extends { id: string; pos: Place }>(seq: YAMLSeq, kind: "level" | "line", keys: string, read: (item: YAMLMap) => T | null): T[] {
+    const out: T[] = [];
     const firstAt = new Map<string, Place>();
     for (const item of seq.items as (Node | null)[]) {
       if (!isMap(item)) {
-        this.add(this.src.place(item ?? seq), `each level must be a map (id, config, term, source, ...), not ${describe(item)}`, "start each level with '- id: ...' and indent its other keys under it");
+        this.add(this.src.place(item ?? seq), `each ${kind} must be a map (${keys}), not ${describe(item)}`, `start each ${kind} with '- id: ...' and indent its other keys under it`);
         continue;
       }
-      const level = this.level(item, nucleus);
-      if (!level) continue;
-      const prev = firstAt.get(level.id);
+      const x = read(item);
+      if (!x) continue;
+      const prev = firstAt.get(x.id);
       if (prev) {
-        this.add({ line: level.pos.line, column: level.pos.column }, `level id "${level.id}" is used twice`, `the first is on line ${prev.line}; give each level its own id`);
+        this.add({ line: x.pos.line, column: x.pos.column }, `${kind} id "${x.id}" is used twice`, `the first is on line ${prev.line}; give each ${kind} its own id`);
         continue;
       }
-      firstAt.set(level.id, { line: level.pos.line, column: level.pos.column });
-      out.set(level.id, level);
+      firstAt.set(x.id, { line: x.pos.line, column: x.pos.column });
+      out.push(x);
     }
     return out;
   }
@@ -219,24 +229,7 @@ class SpeciesReader {
   lines(top: MapReader, levels: Map<string, LevelInput> | null): LineInput[] {
     const seq = top.seq("lines", false, "lines is a list; each line starts with '- id: ...'");
     if (!seq) return [];
-    const out: LineInput[] = [];
-    const firstAt = new Map<string, Place>();
-    for (const item of seq.items as (Node | null)[]) {
-      if (!isMap(item)) {
-        this.add(this.src.place(item ?? seq), `each line must be a map (id, upper, lower, ...), not ${describe(item)}`, "start each line with '- id: ...' and indent its other keys under it");
-        continue;
-      }
-      const line = this.line(item, levels);
-      if (!line) continue;
-      const prev = firstAt.get(line.id);
-      if (prev) {
-        this.add({ line: line.pos.line, column: line.pos.column }, `line id "${line.id}" is used twice`, `the first is on line ${prev.line}; give each line its own id`);
-        continue;
-      }
-      firstAt.set(line.id, { line: line.pos.line, column: line.pos.column });
-      out.push(line);
-    }
-    return out;
+    return this.uniqueItems(seq, "line", "id, upper, lower, ...", (item) => this.line(item, levels));
   }
 
   levelRef(t: TextAt | null, levels: Map<string, LevelInput> | null, role: string): LevelInput | null {
