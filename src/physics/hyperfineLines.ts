@@ -22,7 +22,7 @@ import { Rational } from "./rational.js";
 import { coupledValues, mValues } from "./quantum.js";
 import { sixJ, threeJ } from "./wigner.js";
 import { gF, hyperfineShift } from "./hyperfine.js";
-import type { Polarization } from "./linePattern.js";
+import { polarizationOf, type Polarization } from "./linePattern.js";
 
 /** One component (mF_u → mF_l) of a hyperfine group, exact part only. */
 export interface HyperfineComponentStrength {
@@ -56,13 +56,6 @@ export interface HyperfineGroupStrength {
   /** Share among the groups from the same upper F_u (sums to 1 per F_u; the decay branching ratios for rank 1). Exact. */
   shareOfUpper: Rational;
   components: HyperfineComponentStrength[];
-}
-
-function polarizationOf(q: number): Polarization {
-  if (q === 1) return "sigma+";
-  if (q === 0) return "pi";
-  if (q === -1) return "sigma-";
-  return null;
 }
 
 /**

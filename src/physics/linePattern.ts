@@ -46,7 +46,8 @@ export interface PatternLevel {
   gExact: Rational | null;
 }
 
-function polarizationOf(deltaM: number): Polarization {
+/** The polarization of a component with Δm = q (an ordinary integer); |q| = 2 has none. */
+export function polarizationOf(deltaM: number): Polarization {
   if (deltaM === 1) return "sigma+";
   if (deltaM === 0) return "pi";
   if (deltaM === -1) return "sigma-";

@@ -12,7 +12,7 @@ import type { SpeciesFieldResult } from "../results/computeFields.js";
 import type { ConfiguredField, LevelFieldResult, LineFieldResult, TermFieldResult } from "../results/fieldTypes.js";
 import type { LevelResult, LineResult, SpeciesResult } from "../results/types.js";
 import { fieldStateAnchor, transitionAnchor } from "./anchors.js";
-import { formatNumber } from "./format.js";
+import { formatNumber, polarizationSymbol } from "./format.js";
 import { fieldPlotSvg } from "./plots/fieldPlot.js";
 import { stickPlotSvg } from "./plots/stickPlot.js";
 import { safeFile } from "./speciesPage.js";
@@ -33,7 +33,6 @@ function fieldHeader(f: ConfiguredField): string {
   return f.text;
 }
 
-const pol = (p: string | null) => (p === "sigma+" ? "σ+" : p === "sigma-" ? "σ−" : p === "pi" ? "π" : "—");
 
 export interface LevelFieldSection {
   levelId: string;
@@ -224,7 +223,7 @@ function lineSection(ln: LineResult, f: LineFieldResult, csvBase: string): LineF
           cells: [
             textCell(c.upperLabel.replace(/-/g, "−")),
             textCell(c.lowerLabel.replace(/-/g, "−")),
-            textCell(pol(c.polarization)),
+            textCell(polarizationSymbol(c.polarization)),
             numberCell(c.strength, 6),
             numberCell(c.shiftHz.div(MHZ), 10),
             numberCell(ln.input.wavelength && ln.frequencyHz ? c.shiftHz.neg().mul(ln.input.wavelength.si).div(ln.frequencyHz).mul("1e12") : null, 6),
@@ -292,7 +291,7 @@ function lineSection(ln: LineResult, f: LineFieldResult, csvBase: string): LineF
             quantumCell(c.mFu2, true),
             quantumCell(g.Fl2),
             quantumCell(c.mFl2, true),
-            textCell(pol(c.polarization)),
+            textCell(polarizationSymbol(c.polarization)),
             fractionCell(c.strength),
             numberCell(c.shiftHzPerT.mul("1e-10"), 9),
             textCell(c.cycling ? "cycling" : ""),

@@ -146,3 +146,8 @@ export function writtenDigits(text: string): number {
 export function partsText(p: NumberParts): string {
   return p.sign + p.int + p.frac + (p.unc ?? "") + p.exp;
 }
+
+/** The symbol of a polarization as shown in tables: σ+, π, σ−, or — for |Δm| = 2. */
+export function polarizationSymbol(p: "sigma+" | "pi" | "sigma-" | null): string {
+  return p === "sigma+" ? "σ+" : p === "sigma-" ? "σ−" : p === "pi" ? "π" : "—";
+}

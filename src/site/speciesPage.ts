@@ -22,7 +22,7 @@ import {
   type TermParts,
   textCell,
 } from "./table.js";
-import { formatNumber, partsText, writtenDigits, writtenParts } from "./format.js";
+import { formatNumber, partsText, polarizationSymbol, writtenDigits, writtenParts } from "./format.js";
 
 const partsTextOf = (text: string): string => { const p = writtenParts(text); return p ? partsText(p) : text; };
 
@@ -237,7 +237,7 @@ export function speciesPage(s: SpeciesResult, csvBase: string, exportUrl = `expo
           quantumCell(c.mu2, true),
           quantumCell(c.ml2, true),
           quantumCell(c.deltaM * 2, true),
-          textCell(c.polarization === "sigma+" ? "σ+" : c.polarization === "sigma-" ? "σ−" : c.polarization === "pi" ? "π" : "—"),
+          textCell(polarizationSymbol(c.polarization)),
           fractionCell(c.strength),
           fractionCell(c.shiftLorentzExact),
           numberCell(c.shiftLorentz, SHOWN_DIGITS),

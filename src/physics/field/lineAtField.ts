@@ -25,7 +25,7 @@
 import { Dec, ONE, ZERO } from "../decimal.js";
 import { Rational } from "../rational.js";
 import { threeJ, sixJ, type SignedRoot } from "../wigner.js";
-import type { Polarization } from "../linePattern.js";
+import { polarizationOf, type Polarization } from "../linePattern.js";
 import type { FieldState } from "./hyperfineZeeman.js";
 import type { FineStructureState } from "./fineStructure.js";
 
@@ -64,13 +64,6 @@ export interface FieldLineComponent {
   strength: Dec;
   /** E_u − E_l, Hz: the frequency shift from the zero-field line centre. */
   shift: Dec;
-}
-
-function polarizationOf(q: number): Polarization {
-  if (q === 1) return "sigma+";
-  if (q === 0) return "pi";
-  if (q === -1) return "sigma-";
-  return null;
 }
 
 function signedRootToDec(r: SignedRoot): Dec {
