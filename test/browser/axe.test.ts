@@ -3,8 +3,7 @@ import { join } from "node:path";
 import { AxeBuilder } from "@axe-core/playwright";
 import type { BrowserContext } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { CHROMIUM, hasChromium, launchBrowser, serveStatic, watchPage, type StaticServer } from "../support/browser.js";
-import { demoSite } from "../support/runBuild.js";
+import { CHROMIUM, hasChromium, watchPage, closeDemo, openDemo, type StaticServer } from "../support/browser.js";
 
 if (!hasChromium) console.warn(`browser tests skipped: no Chromium at ${CHROMIUM} (install Debian's chromium package or set CHROMIUM_PATH)`);
 
@@ -16,14 +15,9 @@ describe.skipIf(!hasChromium)("accessibility of every page type (axe-core), with
   let ctx: BrowserContext;
   let server: StaticServer;
   beforeAll(async () => {
-    site = await demoSite();
-    ctx = await launchBrowser();
-    server = await serveStatic(site, "/");
+    ({ site, ctx, server } = await openDemo("/"));
   }, 600_000);
-  afterAll(async () => {
-    await ctx?.close();
-    await server?.close();
-  });
+  afterAll(() => closeDemo(ctx, server));
 
   for (const path of PAGES) {
     it(`${path} has no serious or critical violations, no console errors and no outside requests`, async (t) => {

@@ -2,8 +2,7 @@ import { join } from "node:path";
 import { pathToFileURL } from "node:url";
 import type { BrowserContext } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { CHROMIUM, hasChromium, launchBrowser, serveStatic, type StaticServer } from "../support/browser.js";
-import { demoSite } from "../support/runBuild.js";
+import { CHROMIUM, hasChromium, closeDemo, openDemo, type StaticServer } from "../support/browser.js";
 
 if (!hasChromium) console.warn(`browser tests skipped: no Chromium at ${CHROMIUM} (install Debian's chromium package or set CHROMIUM_PATH)`);
 
@@ -16,15 +15,10 @@ describe.skipIf(!hasChromium)("copy-link on table rows", () => {
   let ctx: BrowserContext;
   let server: StaticServer;
   beforeAll(async () => {
-    site = await demoSite();
-    ctx = await launchBrowser();
-    server = await serveStatic(site, "/lab/atlas/");
+    ({ site, ctx, server } = await openDemo("/lab/atlas/"));
     await ctx.grantPermissions(["clipboard-read", "clipboard-write"], { origin: new URL(server.url).origin });
   }, 600_000);
-  afterAll(async () => {
-    await ctx?.close();
-    await server?.close();
-  });
+  afterAll(() => closeDemo(ctx, server));
 
   it("copies the row's full URL to the clipboard and announces it", async () => {
     const page = await ctx.newPage();

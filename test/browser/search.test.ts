@@ -2,8 +2,7 @@ import { pathToFileURL } from "node:url";
 import { join } from "node:path";
 import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { CHROMIUM, hasChromium, launchBrowser, serveStatic, watchPage as watch, type StaticServer } from "../support/browser.js";
-import { demoSite } from "../support/runBuild.js";
+import { CHROMIUM, hasChromium, watchPage as watch, closeDemo, openDemo, type StaticServer } from "../support/browser.js";
 
 if (!hasChromium) console.warn(`browser tests skipped: no Chromium at ${CHROMIUM} (install Debian's chromium package or set CHROMIUM_PATH)`);
 
@@ -33,14 +32,9 @@ describe.skipIf(!hasChromium)("finder in the browser", () => {
   let ctx: BrowserContext;
   let server: StaticServer;
   beforeAll(async () => {
-    site = await demoSite();
-    ctx = await launchBrowser();
-    server = await serveStatic(site, "/lab/atlas/");
+    ({ site, ctx, server } = await openDemo("/lab/atlas/"));
   }, 600_000);
-  afterAll(async () => {
-    await ctx?.close();
-    await server?.close();
-  });
+  afterAll(() => closeDemo(ctx, server));
 
   it("works from file:// with no network: F=2, 729, 3P2 and ²P₃/₂ land on their rows", async () => {
     const page = await ctx.newPage();

@@ -1,8 +1,7 @@
 import type { BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { dec } from "../../src/physics/decimal.js";
-import { CHROMIUM, hasChromium, launchBrowser, serveStatic, watchPage, type StaticServer } from "../support/browser.js";
-import { demoSite } from "../support/runBuild.js";
+import { CHROMIUM, hasChromium, watchPage, closeDemo, openDemo, type StaticServer } from "../support/browser.js";
 
 if (!hasChromium) console.warn(`browser tests skipped: no Chromium at ${CHROMIUM} (install Debian's chromium package or set CHROMIUM_PATH)`);
 
@@ -29,14 +28,9 @@ describe.skipIf(!hasChromium)("table filter and sort in the browser", () => {
   let server: StaticServer;
   let errors: string[];
   beforeAll(async () => {
-    const site = await demoSite();
-    ctx = await launchBrowser();
-    server = await serveStatic(site, "/");
+    ({ ctx, server } = await openDemo("/"));
   }, 600_000);
-  afterAll(async () => {
-    await ctx?.close();
-    await server?.close();
-  });
+  afterAll(() => closeDemo(ctx, server));
   async function open(path: string): Promise<Page> {
     const page = await ctx.newPage();
     errors = watchPage(page, [server.url, "data:"]);

@@ -3,8 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { Dec, dec } from "../../src/physics/decimal.js";
 import { formatNumber } from "../../src/site/format.js";
 import { ASSET, clientContext } from "../site/searchClient.js";
-import { CHROMIUM, hasChromium, launchBrowser, serveStatic, type StaticServer } from "../support/browser.js";
-import { demoSite } from "../support/runBuild.js";
+import { CHROMIUM, hasChromium, closeDemo, openDemo, type StaticServer } from "../support/browser.js";
 
 if (!hasChromium) console.warn(`browser tests skipped: no Chromium at ${CHROMIUM} (install Debian's chromium package or set CHROMIUM_PATH)`);
 
@@ -53,14 +52,9 @@ describe.skipIf(!hasChromium)("shift unit choice in the browser", () => {
   let ctx: BrowserContext;
   let server: StaticServer;
   beforeAll(async () => {
-    const site = await demoSite();
-    ctx = await launchBrowser();
-    server = await serveStatic(site, "/");
+    ({ ctx, server } = await openDemo("/"));
   }, 600_000);
-  afterAll(async () => {
-    await ctx?.close();
-    await server?.close();
-  });
+  afterAll(() => closeDemo(ctx, server));
 
   /** The switchable cell of a row, and the row's cells under the fixed GHz/T and cm⁻¹/T headers. */
   function cells(page: Page, rowId: string) {

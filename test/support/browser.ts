@@ -7,7 +7,7 @@ import { createServer, type Server } from "node:http";
 import { existsSync, readFileSync, statSync } from "node:fs";
 import { extname, join, normalize } from "node:path";
 import { chromium, type BrowserContext, type Page } from "playwright-core";
-import { tempDir } from "./runBuild.js";
+import { demoSite, tempDir } from "./runBuild.js";
 
 export const CHROMIUM = process.env.CHROMIUM_PATH || "/usr/bin/chromium";
 export const hasChromium = existsSync(CHROMIUM);
@@ -96,4 +96,18 @@ export function watchPage(page: Page, allowed: string[]): string[] {
     if (!allowed.some((a) => r.url().startsWith(a))) problems.push(`request: ${r.url()}`);
   });
   return problems;
+}
+
+/** The shared demo build, one browser, and the site served under `prefix`: what most browser test files start with. */
+export async function openDemo(prefix = "/"): Promise<{ site: string; ctx: BrowserContext; server: StaticServer }> {
+  const site = await demoSite();
+  const ctx = await launchBrowser();
+  const server = await serveStatic(site, prefix);
+  return { site, ctx, server };
+}
+
+/** Close what openDemo opened (either may be missing when set-up failed). */
+export async function closeDemo(ctx: BrowserContext | undefined, server: StaticServer | undefined): Promise<void> {
+  await ctx?.close();
+  await server?.close();
 }
