@@ -23,6 +23,7 @@ import { makeStagingDir, publish, recoverInterrupted } from "./publish.js";
 import { writeAnchors } from "./anchors.js";
 import { selfCheck } from "./selfCheck.js";
 import { formatTimings, timed, timedAsync } from "./timings.js";
+import { bundleBrowser } from "../build/bundleBrowser.js";
 
 const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), "../..");
 
@@ -77,6 +78,8 @@ async function main(): Promise<void> {
       quietMode: true,
     });
     await timedAsync("render", () => eleventy.write());
+    const bundleInto = staging;
+    timed("bundle", () => bundleBrowser(bundleInto));
     if (fault === "render") throw new Error("rendering failed (ATLAS_FAULT=render)");
     if (fault === "selfcheck") appendFileSync(join(staging, "index.html"), '<p id="fault"></p><p id="fault"></p>\n');
     if (fault === "stall") {
