@@ -3,9 +3,9 @@
  * the species is returned only when the file has none.
  */
 import { isMap, type Node, type YAMLMap, type YAMLSeq } from "yaml";
-import { parseDoubled } from "../physics/quantum.js";
+import { formatDoubled, parseDoubled } from "../physics/quantum.js";
 import { didYouMean, nearest } from "./didYouMean.js";
-import { ITEM_ID, ITEM_ID_HINT, SPECIES_ID, SPECIES_ID_HINT, suggestSpeciesId } from "./ids.js";
+import { ITEM_ID, ITEM_ID_HINT, SPECIES_ID, SPECIES_ID_HINT, pageSlug, suggestSpeciesId } from "./ids.js";
 import type { Place } from "./inputError.js";
 import { MULTIPOLES, multipoleRuleBreak } from "./lineRules.js";
 import type { HyperfineInput, LevelInput, LineInput, Measured, Multipole, NucleusInput, Quantity, SpeciesInput } from "./model.js";
@@ -32,6 +32,10 @@ type NucleusState = { kind: "absent" } | { kind: "invalid" } | { kind: "ok"; nuc
 class SpeciesReader {
   /** Every level id written, valid or not, so a line naming a broken level is not reported twice. */
   private readonly writtenLevelIds = new Set<string>();
+  /** Where each valid level's term is written, for problems about its J. */
+  private readonly termAt = new Map<string, Place>();
+  /** Whether the species' J values are integer (2J even); null until the levels are read or when they disagree evenly. */
+  private jIntegral: boolean | null = null;
 
   constructor(
     private readonly src: YamlSource,
@@ -149,7 +153,32 @@ class SpeciesReader {
       return null;
     }
     const levels = this.uniqueItems(seq, "level", "id, config, term, source, ...", (item) => this.level(item, nucleus));
+    this.checkJKinds(levels);
     return new Map(levels.map((l) => [l.id, l]));
+  }
+
+  /**
+   * One atom or ion has only integer J (even number of electrons) or only
+   * half-integer J (odd number). The kind most levels have is taken as the
+   * species' own (the first level's on a tie); every level of the other
+   * kind is reported at its term.
+   */
+  private checkJKinds(levels: LevelInput[]): void {
+    if (levels.length === 0) return;
+    const integral = (l: LevelInput) => l.term.J2 % 2 === 0;
+    const nInt = levels.filter(integral).length;
+    const nHalf = levels.length - nInt;
+    const kind = nInt === nHalf ? integral(levels[0]!) : nInt > nHalf;
+    this.jIntegral = kind;
+    const first = levels.find((l) => integral(l) === kind)!;
+    for (const l of levels) {
+      if (integral(l) === kind) continue;
+      this.add(
+        this.termAt.get(l.id) ?? l.pos,
+        `level "${l.id}" has ${jKind(l.term.J2)} J = ${formatDoubled(l.term.J2)}, but the other levels of this species have ${kind ? "integer" : "half-integer"} J (first: "${first.id}", line ${first.pos.line})`,
+        "one atom or ion has only integer or only half-integer J (even or odd number of electrons); check the term, or move the level to the file of its own species (e.g. the ion)",
+      );
+    }
   }
 
   /**
@@ -160,6 +189,7 @@ class SpeciesReader {
   private uniqueItems<T extends { id: string; pos: Place }>(seq: YAMLSeq, kind: "level" | "line", keys: string, read: (item: YAMLMap) => T | null): T[] {
     const out: T[] = [];
     const firstAt = new Map<string, Place>();
+    const slugOwner = new Map<string, { id: string; at: Place }>();
     for (const item of seq.items as (Node | null)[]) {
       if (!isMap(item)) {
         this.add(this.src.place(item ?? seq), `each ${kind} must be a map (${keys}), not ${describe(item)}`, `start each ${kind} with '- id: ...' and indent its other keys under it`);
@@ -172,7 +202,13 @@ class SpeciesReader {
         this.add({ line: x.pos.line, column: x.pos.column }, `${kind} id "${x.id}" is used twice`, `the first is on line ${prev.line}; give each ${kind} its own id`);
         continue;
       }
+      const other = slugOwner.get(pageSlug(x.id));
+      if (other) {
+        this.add({ line: x.pos.line, column: x.pos.column }, `${kind} ids "${other.id}" and "${x.id}" give the same page name "${pageSlug(x.id)}"`, `"/" and "_" both become "_" in page names; the other is on line ${other.at.line}; rename one of them`);
+        continue;
+      }
       firstAt.set(x.id, { line: x.pos.line, column: x.pos.column });
+      slugOwner.set(pageSlug(x.id), { id: x.id, at: { line: x.pos.line, column: x.pos.column } });
       out.push(x);
     }
     return out;
@@ -193,6 +229,7 @@ class SpeciesReader {
     const notes = r.nonEmpty("notes", false);
     const hyperfine = this.hyperfine(r, nucleus, term?.J2 ?? null);
     if (this.src.sink.count > before || !id || !config || !term || !source) return null;
+    if (termText) this.termAt.set(id.text, termText.at);
     const at = id ? id.at : r.at;
     return {
       id: id.text,
@@ -269,7 +306,15 @@ class SpeciesReader {
     } else {
       const upper = this.levelRef(upperText, levels, "upper");
       const lower = this.levelRef(lowerText, levels, "lower");
-      if (upper && lower && this.src.sink.count === before) {
+      if (upper && lower && this.src.sink.count === before && (upper.term.J2 - lower.term.J2) % 2 !== 0) {
+        // the level of the species' minority kind is the one to look at; on an even split, the upper
+        const odd = this.jIntegral === null || (upper.term.J2 % 2 === 0) !== this.jIntegral ? upperText! : lowerText!;
+        this.add(
+          odd.at,
+          `line${id ? ` ${id.text}` : ""}: upper level "${upper.id}" has ${jKind(upper.term.J2)} J = ${formatDoubled(upper.term.J2)} and lower level "${lower.id}" ${jKind(lower.term.J2)} J = ${formatDoubled(lower.term.J2)}`,
+          "no photon joins integer and half-integer J: both levels of a line belong to one atom or ion; check the upper and lower ids and the terms",
+        );
+      } else if (upper && lower && this.src.sink.count === before) {
         const broken = multipoleRuleBreak(multipole, upper.term, lower.term);
         if (broken) this.add(mpText?.at ?? (id ? id.at : r.at), `line ${id?.text ?? ""}: ${broken.message}`, broken.hint);
       }
@@ -286,6 +331,10 @@ class SpeciesReader {
       pos: { file: this.shownFile, line: id.at.line, column: id.at.column },
     };
   }
+}
+
+function jKind(J2: number): string {
+  return J2 % 2 === 0 ? "integer" : "half-integer";
 }
 
 /**

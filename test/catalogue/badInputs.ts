@@ -47,6 +47,10 @@ const LEVEL_4D52 = `  - id: 4d-D5/2
     config: 4d
     term: 2D5/2
     source: "handbook data"`;
+const LEVEL_3P1 = `  - id: 5s5p-3P1
+    config: 5s5p
+    term: 3Po1
+    source: "handbook data"`;
 const LEVEL_4F72 = `  - id: 4f-F7/2
     config: 4f
     term: 2Fo7/2
@@ -220,6 +224,11 @@ export const BAD_INPUTS: readonly BadInput[] = [
     files: () => rb(insertAfter(RB87, 29, `  - id: 5s-S1/2\n    config: 5s\n    term: 2S1/2\n    source: "handbook data"`)),
     expect: at(R, 30, 9, /level id "5s-S1\/2" is used twice; the first is on line 11/),
   },
+  {
+    name: "two level ids with the same page name",
+    files: () => rb(insertAfter(RB87, 29, `  - id: 5s-S1_2\n    config: 5s\n    term: 2S1/2\n    source: "handbook data"`)),
+    expect: at(R, 30, 9, /level ids "5s-S1\/2" and "5s-S1_2" give the same page name "5s-S1_2"; .*the other is on line 11/),
+  },
   { name: "duplicate line id", files: () => rb(edit(RB87, "  - id: D2", "  - id: D1")), expect: at(R, 35, 9, /line id "D1" is used twice; the first is on line 31/) },
   {
     name: "line naming a missing level",
@@ -273,6 +282,22 @@ export const BAD_INPUTS: readonly BadInput[] = [
     name: "E1 between two odd terms",
     files: () => rb(RB87 + "  - id: fine\n    upper: 5p-P3/2\n    lower: 5p-P1/2\n"),
     expect: at(R, 41, 9, /line fine: E1 line between two odd terms \(2Po3\/2 and 2Po1\/2\) is forbidden by parity/),
+  },
+  // --- integer and half-integer J in one species
+  {
+    name: "integer-J level among half-integer-J levels",
+    files: () => rb(rbWith(LEVEL_3P1, "")),
+    expect: at(R, 32, 11, /level "5s5p-3P1" has integer J = 1, but the other levels of this species have half-integer J \(first: "5s-S1\/2", line 11\); .*one atom or ion has only integer or only half-integer J/),
+  },
+  {
+    name: "line joining integer and half-integer J",
+    files: () => rb(rbWith(LEVEL_3P1, "  - id: mixed\n    upper: 5s5p-3P1\n    lower: 5s-S1/2\n")),
+    expect: at(R, 46, 12, /line mixed: upper level "5s5p-3P1" has integer J = 1 and lower level "5s-S1\/2" half-integer J = 1\/2; no photon joins integer and half-integer J/),
+  },
+  {
+    name: "half-integer-J level among integer-J levels, with its line",
+    files: () => sr(insertAfter(SR88, 15, `  - id: 5s-2S1/2\n    config: 5s\n    term: 2S1/2\n    source: "handbook data"`).replace(/\n?$/, "\n") + "  - id: stray\n    upper: 5s5p-3P1\n    lower: 5s-2S1/2\n"),
+    expect: at(S, 18, 11, /level "5s-2S1\/2" has half-integer J = 1\/2, but the other levels of this species have integer J \(first: "5s2-1S0", line 4\)/),
   },
   // --- nucleus and hyperfine
   {
