@@ -1,0 +1,49 @@
+/**
+ * The one declarative way to define a table: each column says what it is
+ * (label, unit, kind) and how to make its cell from a row; the table says
+ * its id, caption, CSV path and how a row's anchor is made. Everything
+ * every table needs (decimal-point alignment, the export link, dropping
+ * columns that do not apply) is done here once, so a page builder lists
+ * columns and nothing else.
+ *
+ *   const t = makeTable({
+ *     id: "mj:5s-S1/2", caption: "…", csvPath: "species/rb87/csv/….csv",
+ *     anchor: (m) => mJAnchor("5s-S1/2", m.m2),
+ *     columns: [
+ *       { key: "mJ", label: "mJ", kind: "quantum", cell: (m) => quantumCell(m.m2, true) },
+ *       { key: "shift", label: "shift", unit: "MHz/G", kind: "number", cell: (m) => … },
+ *     ],
+ *   }, sublevels);
+ */
+import { alignTable, type Cell, type Column, type Row, type Table } from "./table.js";
+
+export interface ColumnSpec<R> extends Column {
+  cell: (row: R, index: number) => Cell;
+  /** False leaves the column out (a column that does not apply to this table). */
+  when?: boolean;
+}
+
+export interface TableSpec<R> {
+  id: string;
+  caption: string;
+  csvPath: string;
+  /** The species JSON export holding the same rows. */
+  exportUrl?: string;
+  anchor: (row: R, index: number) => string;
+  columns: ColumnSpec<R>[];
+}
+
+/** A table model (table.ts) from a spec and its rows, aligned on the decimal point. */
+export function makeTable<R>(spec: TableSpec<R>, rows: readonly R[]): Table {
+  const specs = spec.columns.filter((c) => c.when !== false);
+  const columns: Column[] = specs.map(({ cell: _cell, when: _when, ...col }) => col);
+  const out: Row[] = rows.map((r, i) => ({ anchor: spec.anchor(r, i), cells: specs.map((c) => c.cell(r, i)) }));
+  return alignTable({
+    id: spec.id,
+    caption: spec.caption,
+    csvPath: spec.csvPath,
+    ...(spec.exportUrl ? { exportUrl: spec.exportUrl } : {}),
+    columns,
+    rows: out,
+  });
+}
