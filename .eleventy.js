@@ -1,17 +1,10 @@
-// Eleventy wiring for Sublevel Atlas. It only connects parts: the data is
-// loaded and computed in src/site/loadAtlas.ts, numbers are formatted in
-// src/site/, and pages are laid out in templates/. See DEVELOPERS.md.
+// Eleventy wiring for Sublevel Atlas. It only connects parts. Eleventy renders
+// the site-wide pages (templates/*.njk); the build (src/build/build.ts) runs
+// it after the species pages are written and hands it the small site summary
+// as the global data `atlas`. See DEVELOPERS.md, "How data flows".
 
 export default async function (eleventyConfig) {
-  const { loadAtlas, buildDateFrom } = await import("./src/site/loadAtlas.ts");
   const { atlasPlugin } = await import("./src/site/eleventyPlugin.ts");
-
-  // --- Data: one computation per build, from ATLAS_DATA (default data/) ---
-  const atlas = loadAtlas({
-    dataDir: process.env.ATLAS_DATA || "data",
-    buildDate: buildDateFrom(process.env),
-  });
-  eleventyConfig.addGlobalData("atlas", atlas);
 
   // --- Templates: Nunjucks, every data string escaped ---
   eleventyConfig.setNunjucksEnvironmentOptions({ autoescape: true, throwOnUndefined: false });
@@ -26,6 +19,5 @@ export default async function (eleventyConfig) {
     dir: { input: "templates", includes: "_includes" },
     templateFormats: ["njk"],
     htmlTemplateEngine: "njk",
-    pathPrefix: atlas.pathPrefix,
   };
 }

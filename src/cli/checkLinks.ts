@@ -10,7 +10,7 @@
 import { readFileSync } from "node:fs";
 import { resolve } from "node:path";
 import { fileURLToPath } from "node:url";
-import { lostAnchors, parseManifest, type AnchorsManifest } from "../site/idScan.js";
+import { compareManifests, parseManifest, type AnchorsManifest } from "../build/anchorsManifest.js";
 
 function load(path: string): AnchorsManifest | string {
   let text: string;
@@ -29,29 +29,34 @@ function load(path: string): AnchorsManifest | string {
   return typeof m === "string" ? `${path} is not an anchors manifest: ${m}` : m;
 }
 
-/** The report and exit code for two manifests; separate from main() so tests need no process. */
+/**
+ * The report and exit code for two manifests; separate from main() so tests
+ * need no process. Moved anchors (forwarded to another page that has them)
+ * are listed apart and do not fail; lost ones do.
+ */
 export function checkLinks(beforePath: string, afterPath: string): { code: number; out: string; err: string } {
   const before = load(beforePath);
   if (typeof before === "string") return { code: 2, out: "", err: before + "\n" };
   const after = load(afterPath);
   if (typeof after === "string") return { code: 2, out: "", err: after + "\n" };
-  const lost = lostAnchors(before, after);
+  const { moved, lost } = compareManifests(before, after);
   const pagesBefore = Object.keys(before.pages).length;
   const anchorsBefore = Object.values(before.pages).reduce((n, ids) => n + ids.length, 0);
-  if (lost.length === 0) {
-    return {
-      code: 0,
-      out: `check-links: all ${anchorsBefore} anchors on ${pagesBefore} pages of ${beforePath} still exist in ${afterPath}\n`,
-      err: "",
-    };
+  const stayed = anchorsBefore - moved.length - lost.length;
+  const out: string[] = [];
+  out.push(`check-links: of ${anchorsBefore} anchors on ${pagesBefore} pages of ${beforePath}, ${stayed} are where they were in ${afterPath}, ${moved.length} moved and are forwarded, ${lost.length} lost`);
+  if (moved.length > 0) {
+    out.push(`moved (a link to the old place is forwarded on load):`);
+    for (const m of moved) out.push(`  ${m.page}#${m.anchor} -> ${m.to}`);
   }
+  if (lost.length === 0) return { code: 0, out: out.join("\n") + "\n", err: "" };
   const gonePages = [...new Set(lost.filter((l) => l.pageGone).map((l) => l.page))];
   const lines = lost.map((l) => `  ${l.page}#${l.anchor}${l.pageGone ? "   (page gone)" : ""}`);
   const summary =
     `check-links: ${lost.length} of ${anchorsBefore} anchors of ${beforePath} are gone in ${afterPath}` +
     (gonePages.length ? ` (${gonePages.length} page(s) gone entirely)` : "") +
     `; links to them will no longer land on their row:`;
-  return { code: 1, out: "", err: [summary, ...lines, ""].join("\n") };
+  return { code: 1, out: out.join("\n") + "\n", err: [summary, ...lines, ""].join("\n") };
 }
 
 function main(argv: string[]): number {

@@ -25,3 +25,33 @@ export const fieldStateAnchor = (levelId: string, F2: number, mF2: number) =>
 /** A transition between two sublevels of one level (lower state first). */
 export const transitionAnchor = (levelId: string, a: { F2: number; mF2: number }, b: { F2: number; mF2: number }) =>
   `rf:${levelId}:F=${formatDoubled(a.F2)},mF=${formatDoubled(a.mF2)}:F=${formatDoubled(b.F2)},mF=${formatDoubled(b.mF2)}`;
+
+// --- Sections and the field-dependent rows (level, line and per-field pages) ---
+
+/** The section of a level's linear sublevel shifts (overview). */
+export const levelShiftsAnchor = (levelId: string) => `level:${levelId}-shifts`;
+/** The section of a level's field-dependent numbers (level page). */
+export const levelFieldSectionAnchor = (levelId: string) => `field:${levelId}-section`;
+/** The section of a line's J-resolved components (line page). */
+export const lineComponentsAnchor = (lineId: string) => `line:${lineId}-components`;
+/** The section of a line's hyperfine-resolved and field-dependent numbers (line page). */
+export const lineFieldsAnchor = (lineId: string) => `line:${lineId}-fields`;
+/** A line at one bias field; `tesla` as exported ("0.0001"). */
+export const lineAtFieldAnchor = (lineId: string, tesla: string) => `line:${lineId}:B=${tesla}T`;
+/**
+ * One component of a line at a field, named by its two states ("F=2, mF=1"
+ * → "F=2,mF=1"). A pair of field eigenstates has one component at most
+ * (q = M_u − M_l is fixed by the pair), so the two labels are a physics key.
+ */
+export const componentAtFieldAnchor = (lineId: string, tesla: string, upperLabel: string, lowerLabel: string) =>
+  `${lineAtFieldAnchor(lineId, tesla)}:${upperLabel}-to-${lowerLabel}`.replace(/\s+/g, "");
+/** A hyperfine group F → F′ of a line. */
+export const hyperfineGroupAnchor = (lineId: string, Fu2: number, Fl2: number) =>
+  `hfl:${lineId}:F=${formatDoubled(Fu2)}-to-F=${formatDoubled(Fl2)}`;
+/** A hyperfine Zeeman component (F, mF) → (F′, mF′) of a line. */
+export const hyperfineComponentAnchor = (lineId: string, Fu2: number, mFu2: number, Fl2: number, mFl2: number) =>
+  `hfc:${lineId}:F=${formatDoubled(Fu2)},mF=${formatDoubled(mFu2)}-to-F=${formatDoubled(Fl2)},mF=${formatDoubled(mFl2)}`;
+/** A fine-structure term ("5p 2P°" → "5p-2Po") and its states. */
+export const termKey = (key: string) => key.replace(/\s+/g, "-").replace(/°/g, "o");
+export const termAnchor = (key: string) => `term:${termKey(key)}`;
+export const termStateAnchor = (key: string, J2: number, mJ2: number) => `term:${termKey(key)}:J=${formatDoubled(J2)}:mJ=${formatDoubled(mJ2)}`;

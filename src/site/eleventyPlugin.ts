@@ -1,12 +1,11 @@
 /**
  * The Eleventy plugin of Sublevel Atlas: every filter, transform and
- * passthrough copy the templates rely on, registered in one place.
+ * passthrough copy the site-wide pages rely on, registered in one place.
+ * Species pages are rendered outside Eleventy with the same filters
+ * (src/build/renderPages.ts).
  */
-import { relativeUrl } from "./relativeUrl.js";
 import { rewriteRootLinks } from "./rewriteRootLinks.js";
-import { tableRowsHtml } from "./tableRows.js";
-import type { Table } from "./table.js";
-import { searchData, searchIndexScript, type SearchSource } from "./searchIndex.js";
+import { atlasFilters } from "./filters.js";
 
 // Eleventy's UserConfig has no published types; the few methods used here are typed locally.
 interface EleventyConfigLike {
@@ -22,8 +21,7 @@ export function atlasPlugin(eleventyConfig: EleventyConfigLike): void {
   eleventyConfig.addPassthroughCopy({ "node_modules/minisearch/dist/umd/index.js": "assets/minisearch.js" });
 
   // Every site-root link becomes relative to its page (works from file:// and under any prefix).
-  // A string pass (rewriteRootLinks.ts) rather than Eleventy's HTML-parsing URL transform,
-  // which took about half of a large build.
+  // A string pass (rewriteRootLinks.ts) rather than Eleventy's HTML-parsing URL transform.
   eleventyConfig.addTransform("atlas-relative-links", function (content: string) {
     const out = this.page?.outputPath;
     if (typeof out !== "string" || !out.endsWith(".html")) return content;
@@ -31,14 +29,5 @@ export function atlasPlugin(eleventyConfig: EleventyConfigLike): void {
     return rewriteRootLinks(content, typeof url === "string" ? url : "/");
   });
 
-  // The <tr> rows of a table model, as HTML (output with | safe; every value escaped inside).
-  eleventyConfig.addFilter("tableRows", (table: Table) => tableRowsHtml(table));
-
-  // A value as JSON for an inline data attribute or script.
-  eleventyConfig.addFilter("toJson", (value: never) => JSON.stringify(value));
-
-  // The relative path from a page to the site root ("./", "../../"), for <body data-root> (finder links).
-  eleventyConfig.addFilter("rootPath", (pageUrl: string) => relativeUrl("/index.html", pageUrl).replace(/index\.html$/, "") || "./");
-  // assets/search-index.js from the atlas (templates/search-index.njk).
-  eleventyConfig.addFilter("searchIndexScript", (atlas: SearchSource) => searchIndexScript(searchData(atlas)));
+  for (const [name, fn] of Object.entries(atlasFilters)) eleventyConfig.addFilter(name, fn as (...args: never[]) => unknown);
 }

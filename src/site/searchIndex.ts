@@ -12,6 +12,7 @@
  * row id of the built pages and every row id is reachable.
  */
 import type { Dec } from "../physics/decimal.js";
+import { htmlFile, linePagePath } from "./pageUrls.js";
 import { searchTokens, termKeys } from "./searchNormalize.js";
 
 /** The parts of the atlas the search reads (an Atlas satisfies it). */
@@ -34,8 +35,8 @@ export interface SearchSource {
 export type SpeciesDoc = [string, string, string, string];
 /** [species index, id, term as written, id keys, term keys, doubled J, doubled F values] */
 export type LevelDoc = [number, string, string, string, string, number, number[]];
-/** [species index, id, upper level index, lower level index, vacuum λ in nm or "", multipole, id keys, flat (mu2, ml2) pairs] */
-export type LineDoc = [number, string, number, number, string, string, string, number[]];
+/** [species index, id, upper level index, lower level index, vacuum λ in nm or "", multipole, id keys, flat (mu2, ml2) pairs, line page from the site root] */
+export type LineDoc = [number, string, number, number, string, string, string, number[], string];
 
 export interface SearchData {
   /** Format version; the finder refuses others. */
@@ -84,10 +85,27 @@ export function searchData(atlas: SearchSource): SearchData {
         ln.input.multipole,
         idKeys(ln.input.id),
         ln.components.flatMap((c) => [c.mu2, c.ml2]),
+        htmlFile(linePagePath(s.id, ln.input.id)),
       ]);
     }
   });
   return { v: 1, species, levels, lines };
+}
+
+/**
+ * The search data of several sites built one species at a time, as one:
+ * species and level indices of each part shifted past the parts before it.
+ */
+export function mergeSearchData(parts: Iterable<SearchData>): SearchData {
+  const out: SearchData = { v: 1, species: [], levels: [], lines: [] };
+  for (const p of parts) {
+    const si = out.species.length;
+    const li = out.levels.length;
+    out.species.push(...p.species);
+    for (const l of p.levels) out.levels.push([l[0] + si, ...l.slice(1)] as LevelDoc);
+    for (const n of p.lines) out.lines.push([n[0] + si, n[1], n[2] < 0 ? -1 : n[2] + li, n[3] < 0 ? -1 : n[3] + li, ...n.slice(4)] as LineDoc);
+  }
+  return out;
 }
 
 /** The classic script that carries the data: one global, `AtlasSearchData`. */

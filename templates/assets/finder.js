@@ -183,7 +183,7 @@
         if (qn.ml !== undefined && qn.ml !== ml) continue;
         var dm = (mu - ml) / 2;
         var pol = dm === 1 ? "σ+" : dm === -1 ? "σ" + MINUS : dm === 0 ? "π" : "Δm = " + shown(2 * dm);
-        out.push({ kind: "Zeeman component", href: page + "#line:" + id + ":mu=" + fd(mu) + ",ml=" + fd(ml), label: base + " · m " + shown(mu) + " → " + shown(ml) + " · " + pol });
+        out.push({ kind: "Zeeman component", href: (n[8] || page) + "#line:" + id + ":mu=" + fd(mu) + ",ml=" + fd(ml), label: base + " · m " + shown(mu) + " → " + shown(ml) + " · " + pol });
       }
     }
 

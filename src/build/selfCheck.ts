@@ -11,7 +11,7 @@ import { checkFiniteNumbers } from "../checks/finiteNumbers.js";
 import { checkLineReferences } from "../checks/lineReferences.js";
 import { checkStrengthSums } from "../checks/strengthSums.js";
 import { checkUniqueAnchors } from "../checks/uniqueAnchors.js";
-import type { Atlas } from "../site/atlas.js";
+import type { SiteSummary } from "../site/siteSummary.js";
 import { htmlFiles } from "./anchors.js";
 
 /** Every check of one parsed export. */
@@ -24,7 +24,7 @@ export function checkExport(value: unknown, file: string): string[] {
   ];
 }
 
-export function selfCheck(staging: string, atlas: Pick<Atlas, "species">): string[] {
+export function selfCheck(staging: string, atlas: Pick<SiteSummary, "species">): string[] {
   const problems: string[] = [];
   for (const s of atlas.species) {
     const path = join(staging, s.exportUrl);

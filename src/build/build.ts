@@ -1,0 +1,134 @@
+/**
+ * The build, in one place and in order:
+ *
+ *   load     validate the whole data folder; every problem reported before anything is written
+ *   species  for each species: compute → page view models → render → write → release (speciesBuild.ts)
+ *   site     the site-wide pages through Eleventy, from a small summary; search index; browser scripts
+ *   check    anchors manifest and self-checks over the staged files
+ *   publish  the staging folder renamed into place (publish.ts)
+ *
+ * Memory holds one species' results and pages at a time, plus the small
+ * summaries of the species done so far.
+ */
+import { mkdirSync, writeFileSync, appendFileSync } from "node:fs";
+import { dirname, join, resolve } from "node:path";
+import { loadDataFolder } from "../data/loadDataFolder.js";
+import { editionByName } from "../physics/constants/editions.js";
+import { publicBase } from "../site/publicBase.js";
+import { mergeSearchData, searchIndexScript } from "../site/searchIndex.js";
+import { sheetAddress } from "../site/sheet.js";
+import { constantsTable, siteFrameParts, type SiteSummary } from "../site/siteSummary.js";
+import { writeAnchors } from "./anchors.js";
+import { bundleBrowser } from "./bundleBrowser.js";
+import { ROOT } from "./paths.js";
+import { makeStagingDir, publish, recoverInterrupted } from "./publish.js";
+import { pageRenderer } from "./renderPages.js";
+import { selfCheck } from "./selfCheck.js";
+import { buildSpecies, type SiteFrame, type SpeciesSummary } from "./speciesBuild.js";
+import { timed, timedAsync } from "./timings.js";
+
+export interface BuildOptions {
+  dataDir: string;
+  out: string;
+  /** ISO date-time shown as the build date. */
+  buildDate: string;
+  /** Test-only fault injection (see src/cli/build.ts). */
+  fault?: string;
+  /** Told the staging folder as soon as it exists (for clean-up on a signal). */
+  onStaging?: (dir: string | null) => void;
+}
+
+/** Thrown when the self-checks refuse the staged site. */
+export class SelfCheckFailed extends Error {
+  constructor(readonly problems: string[]) {
+    super(`self-check failed:\n${problems.map((p) => `  ${p}`).join("\n")}`);
+  }
+}
+
+/** The build date: SOURCE_DATE_EPOCH (seconds) when set, so builds can be reproduced; else now. */
+export function buildDateFrom(env: NodeJS.ProcessEnv, now: () => Date = () => new Date()): string {
+  const epoch = env.SOURCE_DATE_EPOCH;
+  if (epoch !== undefined && /^\d+$/.test(epoch)) return new Date(Number(epoch) * 1000).toISOString();
+  return now().toISOString();
+}
+
+export async function buildSite(opts: BuildOptions): Promise<{ species: number }> {
+  const out = resolve(opts.out);
+  recoverInterrupted(out);
+
+  // --- load: throws InputProblems before anything is written ---
+  const folder = timed("load", () => loadDataFolder(opts.dataDir));
+  const constants = editionByName(folder.site.constants)!; // the data layer checked the name
+  const fields = folder.site.fields.map((f) => ({ text: f.text, tesla: f.tesla.toString() }));
+  const siteUrl = publicBase(folder.site.siteUrl, folder.site.pathPrefix);
+  const build = { date: opts.buildDate, constantsEdition: constants.edition, dataVersion: folder.dataVersion };
+  const frame: SiteFrame = { title: folder.site.title, lab: folder.site.lab, build, sheets: siteFrameParts(constants, fields) };
+
+  if (opts.fault === "busy") {
+    // Stands for a long synchronous computation (physics of a large data set).
+    process.stderr.write("busy before staging\n");
+    for (;;);
+  }
+
+  const staging = makeStagingDir(out);
+  opts.onStaging?.(staging);
+  const write = (path: string, text: string) => {
+    const file = join(staging, path);
+    mkdirSync(dirname(file), { recursive: true });
+    writeFileSync(file, text);
+  };
+
+  // --- species, one at a time ---
+  const render = pageRenderer();
+  const summaries: SpeciesSummary[] = [];
+  for (const input of [...folder.species].sort((a, b) => a.id.localeCompare(b.id, "en"))) {
+    summaries.push(buildSpecies(input, { constants, configured: folder.site.fields, siteUrl, frame, render, write }));
+  }
+
+  // --- site-wide pages, from the summary ---
+  write("assets/search-index.js", timed("search", () => searchIndexScript(mergeSearchData(summaries.map((s) => s.search)))));
+  const summary: SiteSummary = {
+    title: folder.site.title,
+    lab: folder.site.lab,
+    siteUrl,
+    pathPrefix: folder.site.pathPrefix,
+    build,
+    constants: { edition: constants.edition, reference: constants.reference },
+    constantsTable: constantsTable(constants),
+    fields,
+    species: summaries.map(({ id, label, url, exportUrl, summary, sheet }) => ({ id, label, url, exportUrl, summary, sheet })),
+    sheets: { ...frame.sheets, all: summaries.map((s) => s.sheet), allAddress: sheetAddress(siteUrl, "sheet/") },
+  };
+  await timedAsync("site", () => renderSitePages(staging, summary));
+  timed("bundle", () => bundleBrowser(staging));
+
+  if (opts.fault === "render") throw new Error("rendering failed (ATLAS_FAULT=render)");
+  if (opts.fault === "selfcheck") appendFileSync(join(staging, "index.html"), '<p id="fault"></p><p id="fault"></p>\n');
+  if (opts.fault === "stall") {
+    process.stderr.write(`stalled with staging folder ${staging}\n`);
+    await new Promise(() => setInterval(() => {}, 1 << 30));
+  }
+
+  // --- check, then publish ---
+  timed("anchors", () => writeAnchors(staging));
+  const problems = timed("check", () => selfCheck(staging, summary));
+  if (problems.length > 0) throw new SelfCheckFailed(problems);
+  timed("publish", () => publish(staging, out));
+  opts.onStaging?.(null);
+  return { species: summaries.length };
+}
+
+/** Eleventy renders templates/*.njk (index, constants, methods, all-species sheet) and copies the assets. */
+async function renderSitePages(staging: string, summary: SiteSummary): Promise<void> {
+  const { default: Eleventy } = await import("@11ty/eleventy");
+  // Passthrough copies (templates/assets, schema, node_modules/minisearch) are named from the repository root.
+  process.chdir(ROOT);
+  const eleventy = new Eleventy(join(ROOT, "templates"), staging, {
+    configPath: join(ROOT, ".eleventy.js"),
+    quietMode: true,
+    config: (eleventyConfig: { addGlobalData(name: string, value: unknown): void }) => {
+      eleventyConfig.addGlobalData("atlas", summary);
+    },
+  });
+  await eleventy.write();
+}

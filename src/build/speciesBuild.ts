@@ -1,0 +1,164 @@
+/**
+ * One species from input to files: compute (exact results at the configured
+ * fields) → page view models → rendered pages, CSV files, the JSON export →
+ * written, and then dropped. What the site-wide pages need of the species
+ * comes back as a small summary. The build runs this once per species, in
+ * turn or in worker threads, so memory holds one species at a time.
+ */
+import { val, type ConstantsEdition } from "../physics/constants/constant.js";
+import type { SpeciesInput } from "../data/model.js";
+import { computeSpecies } from "../results/computeSpecies.js";
+import { computeFields } from "../results/computeFields.js";
+import type { ConfiguredField } from "../results/fieldTypes.js";
+import { tableCsv } from "../site/csv.js";
+import { speciesExport } from "../site/exportJson.js";
+import { exportPath, htmlFile, sheetPath, speciesPath } from "../site/pageUrls.js";
+import { searchData, type SearchData } from "../site/searchIndex.js";
+import { sheetAddress, speciesSheet, type SpeciesSheet } from "../site/sheet.js";
+import { scanIds } from "../site/idScan.js";
+import type { Table } from "../site/table.js";
+import { levelViews, lineViews, overviewView, type PageView, type SpeciesViewsInput } from "../site/speciesViews.js";
+import { hasPagesBelow, movedMap, movedScript, MOVED_FILE, type PageIds } from "./forwarding.js";
+import type { RenderPage } from "./renderPages.js";
+import { timed } from "./timings.js";
+
+/**
+ * A line or level page above this size is split: a line gets one page per
+ * bias field, a level a page for its transitions (the budget for any page
+ * is 500 kB; the margin is for what a later edit adds).
+ */
+export const PAGE_LIMIT = 450_000;
+
+/** What every page of the build shares: the frame of the layout and of the bench sheets. */
+export interface SiteFrame {
+  title: string;
+  lab: string | null;
+  build: { date: string; constantsEdition: string; dataVersion: string };
+  sheets: { fields: { text: string; lorentzMHz: string }[]; bohr: string };
+}
+
+export interface SpeciesBuildContext {
+  constants: ConstantsEdition;
+  configured: ConfiguredField[];
+  siteUrl: string | null;
+  frame: SiteFrame;
+  render: RenderPage;
+  /** Write a file of the site (path relative to the site root). */
+  write: (path: string, text: string) => void;
+}
+
+/** What the site-wide pages and the search need of a species. */
+export interface SpeciesSummary {
+  id: string;
+  label: string;
+  url: string;
+  exportUrl: string;
+  summary: { levels: number; lines: number; nuclearSpin: string | null };
+  /** The compact rows of the all-species bench sheet. */
+  sheet: SpeciesSheet;
+  search: SearchData;
+  /** Bytes written per kind of page, for the benchmark. */
+  pages: number;
+}
+
+function tablesOf(view: PageView): Table[] {
+  switch (view.kind) {
+    case "overview":
+      return [view.glance, view.levels, ...view.shiftSections.flatMap((s) => s.tables), view.lines, ...view.energies.map((e) => e.table), ...view.terms.map((t) => t.table)];
+    case "level":
+      return [view.energies, ...(view.transitions ? [view.transitions] : [])];
+    case "transitions":
+      return [view.transitions];
+    case "line":
+      return [view.components, ...(view.hyperfine ? [view.hyperfine, view.hyperfineComponents!] : []), ...(view.atFields ?? []).flatMap((a) => (a.table ? [a.table] : []))];
+    case "line-field":
+      return view.atField.table ? [view.atField.table] : [];
+  }
+}
+
+export function buildSpecies(input: SpeciesInput, ctx: SpeciesBuildContext): SpeciesSummary {
+  const result = timed("physics", () => computeSpecies(input, ctx.constants));
+  const fields = timed("physics", () => computeFields(result, ctx.constants, ctx.configured));
+  const id = input.id;
+  const v: SpeciesViewsInput = { result, fields, configured: ctx.configured, muB_h: val(ctx.constants.muB_h) };
+  const atlas = ctx.frame;
+  const csv = new Map<string, string>();
+  const rendered: { view: PageView; html: string }[] = [];
+  const render = (view: PageView, movedAnchors: string | null) =>
+    timed("render", () => ctx.render(`species/${view.kind}.njk`, `/${htmlFile(view.path)}`, { view, atlas, pageTitle: view.title, movedAnchors }));
+
+  // Line pages first: one that is too large is rendered again with a page per field.
+  const keep = (view: PageView, html: string) => {
+    rendered.push({ view, html });
+    for (const t of tablesOf(view)) if (t.csvPath) csv.set(t.csvPath, tableCsv(t));
+  };
+  const whole = timed("views", () => lineViews(v, () => false));
+  const tooLarge = new Set<string>();
+  for (const line of whole.lines) {
+    const html = render(line, null);
+    if (Buffer.byteLength(html) > PAGE_LIMIT) tooLarge.add(line.lineId);
+    else keep(line, html);
+  }
+  if (tooLarge.size > 0) {
+    const split = timed("views", () => lineViews(v, (lineId) => tooLarge.has(lineId)));
+    for (const line of split.lines) if (tooLarge.has(line.lineId)) keep(line, render(line, MOVED_FILE));
+    for (const lf of split.lineFields) keep(lf, render(lf, null));
+  }
+  // Level pages likewise: one that is too large gets its transitions on a page of their own.
+  const bigLevels = new Set<string>();
+  for (const level of timed("views", () => levelViews(v)).levels) {
+    const html = render(level, null);
+    if (Buffer.byteLength(html) > PAGE_LIMIT && level.transitions) bigLevels.add(level.levelId);
+    else keep(level, html);
+  }
+  if (bigLevels.size > 0) {
+    const split = timed("views", () => levelViews(v, (levelId) => bigLevels.has(levelId)));
+    for (const level of split.levels) if (bigLevels.has(level.levelId)) keep(level, render(level, MOVED_FILE));
+    for (const t of split.transitions) keep(t, render(t, null));
+  }
+  const overview = timed("views", () => overviewView(v));
+  const paths = [overview.path, ...rendered.map((r) => r.view.path)];
+  keep(overview, render(overview, hasPagesBelow(overview.path, paths) ? MOVED_FILE : null));
+
+  // Forwarding maps, from the ids of the rendered pages.
+  const ids: PageIds[] = rendered.map((r) => ({ path: r.view.path, ids: scanIds(r.html) }));
+  for (const page of ids) {
+    if (!hasPagesBelow(page.path, paths)) continue;
+    const map = movedMap(page, ids);
+    if (map) ctx.write(`${page.path}${MOVED_FILE}`, movedScript(map));
+  }
+
+  timed("write", () => {
+    for (const r of rendered) ctx.write(htmlFile(r.view.path), r.html);
+    for (const [path, text] of csv) ctx.write(path, text);
+  });
+  const buildInfo = { constantsEdition: ctx.constants.edition, dataVersion: atlas.build.dataVersion };
+  const exportJson = timed("export", () => JSON.stringify(speciesExport(result, buildInfo, { result: fields, configured: ctx.configured }), null, 2) + "\n");
+  ctx.write(exportPath(id), exportJson);
+
+  const sheetView = {
+    id,
+    label: input.label,
+    url: speciesPath(id),
+    sheet: speciesSheet(result, { mList: true }),
+    sheetAddress: sheetAddress(ctx.siteUrl, sheetPath(id)),
+  };
+  const sheetHtml = timed("render", () => ctx.render("species/sheet.njk", `/${htmlFile(sheetPath(id))}`, { s: sheetView, atlas, pageTitle: `${input.label} bench sheet` }));
+  ctx.write(htmlFile(sheetPath(id)), sheetHtml);
+
+  const url = speciesPath(id);
+  return {
+    id,
+    label: input.label,
+    url,
+    exportUrl: exportPath(id),
+    summary: {
+      levels: input.levels.length,
+      lines: input.lines.length,
+      nuclearSpin: input.nucleus ? (input.nucleus.I2 % 2 === 0 ? String(input.nucleus.I2 / 2) : `${input.nucleus.I2}/2`) : null,
+    },
+    sheet: speciesSheet(result, { mList: false }),
+    search: searchData({ species: [{ id, label: input.label, url, result }] }),
+    pages: rendered.length + 1,
+  };
+}

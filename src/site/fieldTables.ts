@@ -1,0 +1,276 @@
+/**
+ * Tables and pictures of the field-dependent numbers: energies at the bias
+ * fields, how far the linear numbers hold, sublevel transitions with
+ * field-insensitive points, fine-structure terms, hyperfine groups of a line
+ * and each line at each bias field. Laid out from src/results/computeFields.ts.
+ */
+import { Dec, exportText } from "../physics/decimal.js";
+import { formatDoubled } from "../physics/quantum.js";
+import { SPEED_OF_LIGHT } from "../physics/units.js";
+import type { ConfiguredField, FieldRow, LevelFieldResult, LineAtFieldResult, LineComponentAtField, TermFieldResult } from "../results/fieldTypes.js";
+import type { HyperfineLineGroup } from "../physics/hyperfineLines.js";
+import type { SublevelTransition } from "../physics/field/sublevelTransitions.js";
+import type { FineStructureState } from "../physics/field/fineStructure.js";
+import type { LevelResult, LineResult } from "../results/types.js";
+import {
+  componentAtFieldAnchor,
+  fieldStateAnchor,
+  hyperfineComponentAnchor,
+  hyperfineGroupAnchor,
+  termAnchor,
+  termKey,
+  termStateAnchor,
+  transitionAnchor,
+} from "./anchors.js";
+import { formatNumber, polarizationSymbol } from "./format.js";
+import { fieldPlotSvg } from "./plots/fieldPlot.js";
+import { stickPlotSvg } from "./plots/stickPlot.js";
+import { safeFile, type TableHome } from "./linearTables.js";
+import { fractionCell, numberCell, quantumCell, textCell, type Table } from "./table.js";
+import { makeTable } from "./tableSpec.js";
+
+const MHZ = new Dec("1e6");
+const GAUSS = new Dec("1e-4");
+
+/** A field for reading: gauss below 0.1 T, tesla from there on. */
+export function fieldText(tesla: Dec | null, sig = 5): string {
+  if (tesla === null) return "beyond the searched range";
+  if (tesla.isZero()) return "0 G";
+  if (tesla.lt("0.1")) return `${formatNumber(tesla.div(GAUSS), sig)} G`;
+  return `${formatNumber(tesla, sig)} T`;
+}
+
+const stateText = (F2: number, mF2: number) => `${formatDoubled(F2)}, ${formatDoubled(mF2).replace(/^-/, "−")}`;
+
+/**
+ * Exact energies of every sublevel of a level at the configured fields. The
+ * full form (level page) adds the high-field labels and the quadratic
+ * coefficient; the short form (overview) has the energies only. Both rows
+ * carry the same anchors, on different pages.
+ */
+export function energiesTable(l: LevelResult, f: LevelFieldResult, fields: ConfiguredField[], home: TableHome, full: boolean): Table {
+  const lid = l.input.id;
+  const hasHf = f.validity !== null;
+  return makeTable<FieldRow>(
+    {
+      id: full ? `field-full:${lid}` : `field:${lid}`,
+      caption: `${l.input.term.text} (${lid}): exact sublevel energies at the bias fields, from the level centre`,
+      csvPath: `${home.csvBase}/field-${safeFile(lid)}-energies${full ? "-full" : ""}.csv`,
+      exportUrl: home.exportUrl,
+      anchor: (r) => fieldStateAnchor(lid, r.F2, r.mF2),
+      columns: [
+        { key: "F", label: hasHf ? "F" : "J", kind: "quantum", cell: (r) => quantumCell(r.F2) },
+        { key: "mF", label: hasHf ? "mF" : "mJ", kind: "quantum", cell: (r) => quantumCell(r.mF2, true) },
+        { key: "hf_mJ", label: "high-field mJ", kind: "quantum", when: full && hasHf, cell: (r) => quantumCell(r.highField.mJ2, true) },
+        { key: "hf_mI", label: "high-field mI", kind: "quantum", when: full && hasHf, cell: (r) => quantumCell(r.highField.mI2, true) },
+        {
+          key: "quad", label: "quadratic", unit: "Hz/G²", kind: "number", when: full && hasHf,
+          cell: (r) => numberCell(r.quadraticPerTesla2 === null ? null : r.quadraticPerTesla2.mul("1e-8"), 7),
+        },
+        ...fields.map((b, i) => ({
+          key: `E${i}`, label: `E at ${b.text}`, unit: "MHz", kind: "number" as const,
+          cell: (r: FieldRow) => numberCell(r.energies[i]!.div(MHZ), 12),
+        })),
+      ],
+    },
+    f.rows,
+  );
+}
+
+/** Sentences on where a level's linear numbers stop holding. */
+export function validityFacts(f: LevelFieldResult): string[] {
+  const v = f.validity;
+  if (!v) return ["No hyperfine structure: in this model the shifts are exactly linear; see the fine-structure section where partners are listed."];
+  const first = (s: { F2: number; mF2: number } | null) => (s ? ` (first to leave: F = ${formatDoubled(s.F2)}, mF = ${formatDoubled(s.mF2)})` : "");
+  return [
+    `Linear shifts within 1 % of the exact ones up to ${fieldText(v.relative.tesla)}${first(v.relative.sublevel)}.`,
+    `Linear shifts within 1 kHz of the exact ones up to ${fieldText(v.absolute.tesla)}${first(v.absolute.sublevel)}.`,
+    ...(v.paschenBackTesla ? [`Hyperfine Paschen–Back scale (largest hyperfine interval over μB·|gJ|/h): ${fieldText(v.paschenBackTesla)}; well above it the states are |mJ, mI⟩.`] : []),
+  ];
+}
+
+/** Energy-against-field plots of a level (linear and logarithmic field axis), or null. */
+export function levelPlots(l: LevelResult, f: LevelFieldResult, fields: ConfiguredField[]): { linear: string; log: string } | null {
+  if (!f.plot) return null;
+  const lid = l.input.id;
+  const curves = (energies: readonly (readonly number[])[]) =>
+    f.rows.map((r, i) => ({ label: `F=${formatDoubled(r.F2)}, mF=${formatDoubled(r.mF2).replace(/^-/, "−")}`, energies: energies[i]! }));
+  const common = {
+    title: `${l.input.term.text} (${lid}): sublevel energies against field`,
+    description: `Energy of each (F, mF) sublevel of ${lid} from the level centre as the field grows; vertical rules mark the bias fields.`,
+    rules: fields.filter((b) => b.tesla.gt(0)).map((b) => ({ tesla: b.tesla, label: b.text })),
+  };
+  return {
+    linear: fieldPlotSvg({ ...common, id: `plot-lin-${safeFile(lid)}`, fields: f.plot.linear.fields, curves: curves(f.plot.linear.energies) }, "linear"),
+    log: fieldPlotSvg({ ...common, id: `plot-log-${safeFile(lid)}`, fields: f.plot.log.fields, curves: curves(f.plot.log.energies) }, "log"),
+  };
+}
+
+/** Transitions between the sublevels of a level, with their field-insensitive points; null when there are none. */
+export function transitionsTable(l: LevelResult, f: LevelFieldResult, fields: ConfiguredField[], home: TableHome): Table | null {
+  if (f.transitions.length === 0) return null;
+  const lid = l.input.id;
+  const positive = fields.filter((b) => b.tesla.gt(0));
+  return makeTable<SublevelTransition>(
+    {
+      id: `rf:${lid}`,
+      caption: `${l.input.term.text} (${lid}): transitions between sublevels (microwave and radio frequency)`,
+      csvPath: `${home.csvBase}/field-${safeFile(lid)}-transitions.csv`,
+      exportUrl: home.exportUrl,
+      anchor: (t) => transitionAnchor(lid, t.lower, t.upper),
+      columns: [
+        { key: "lower", label: "lower (F, mF)", kind: "text", cell: (t) => textCell(stateText(t.lower.F2, t.lower.mF2)) },
+        { key: "upper", label: "upper (F, mF)", kind: "text", cell: (t) => textCell(stateText(t.upper.F2, t.upper.mF2)) },
+        { key: "kind", label: "kind", kind: "text", cell: (t) => textCell(t.kind === "two-photon" ? "two-photon" : "magnetic dipole") },
+        { key: "f0", label: "f at 0 G", unit: "MHz", kind: "number", cell: (t) => numberCell(t.zeroFieldHz.div(MHZ), 12) },
+        { key: "d1", label: "df/dB", unit: "kHz/G", kind: "number", cell: (t) => numberCell(t.firstOrder.hzPerGauss.div("1e3"), 9) },
+        { key: "d2", label: "d²f/dB² ÷ 2", unit: "Hz/G²", kind: "number", cell: (t) => numberCell(t.secondOrder ? t.secondOrder.hzPerGauss2 : null, 7) },
+        ...positive.map((b, i) => ({
+          key: `f${i}`, label: `f at ${b.text}`, unit: "MHz", kind: "number" as const,
+          cell: (t: SublevelTransition) => numberCell(t.atFields.filter((a) => a.tesla.gt(0))[i]!.hz.div(MHZ), 12),
+        })),
+        {
+          key: "insensitive", label: "field-insensitive at", kind: "text",
+          cell: (t) =>
+            textCell(
+              t.fieldInsensitive.length === 0
+                ? "none below 1 T"
+                : t.fieldInsensitive.map((p) => `${fieldText(p.tesla, 7)} (${formatNumber(p.hz.div(MHZ), 12)} MHz)`).join("; "),
+            ),
+        },
+      ],
+    },
+    f.transitions,
+  );
+}
+
+/** What is said about a fine-structure term treated in the Paschen–Back solver. */
+export function termFacts(t: TermFieldResult): string[] {
+  return [
+    `Fine-structure partners: ${t.levelIds.join(", ")}.`,
+    t.fit.zeta
+      ? `Spin–orbit constant ζ/h = ${formatNumber(t.fit.zeta.div("1e9"), 9)} GHz from the listed energies${t.levelIds.length > 2 ? ` (interval-rule residual, rms: ${formatNumber(t.fit.rms.div("1e9"), 4)} GHz)` : ""}.`
+      : "Spin–orbit constant: not defined for this term.",
+    `The J-resolved linear pattern is off by more than 1 % from ${t.limit ? fieldText(t.limit.tesla) : "no field below the searched range"}${t.limit ? ` (first: J = ${formatDoubled(t.limit.J2)}, mJ = ${formatDoubled(t.limit.mJ2)})` : ""}.`,
+    ...(t.paschenBackTesla ? [`Fine-structure Paschen–Back scale (largest interval over μB/h): ${fieldText(t.paschenBackTesla)}.`] : []),
+    "Hyperfine structure is left out of this treatment: it matters only where its splitting is comparable to the fine-structure mixing, far below these fields for the usual alkali and alkaline-earth terms.",
+  ];
+}
+
+/** The states of a fine-structure term at every bias field. */
+export function termTable(t: TermFieldResult, fields: ConfiguredField[], home: TableHome): Table {
+  const first = t.atFields[0] ?? [];
+  return makeTable<FineStructureState>(
+    {
+      id: `term:${termKey(t.key)}`,
+      caption: `${t.key}: fine-structure states at the bias fields (spin–orbit + Zeeman in |mL mS⟩)`,
+      csvPath: `${home.csvBase}/term-${safeFile(t.key)}.csv`,
+      exportUrl: home.exportUrl,
+      anchor: (st) => termStateAnchor(t.key, st.J2, st.mJ2),
+      columns: [
+        { key: "J", label: "J", kind: "quantum", cell: (st) => quantumCell(st.J2) },
+        { key: "mJ", label: "mJ", kind: "quantum", cell: (st) => quantumCell(st.mJ2, true) },
+        { key: "mL", label: "high-field mL", kind: "quantum", cell: (st) => quantumCell(st.mL2, true) },
+        { key: "mS", label: "high-field mS", kind: "quantum", cell: (st) => quantumCell(st.mS2, true) },
+        ...fields.map((b, i) => ({
+          key: `E${i}`, label: `shift at ${b.text}`, unit: "MHz", kind: "number" as const,
+          cell: (_st: FineStructureState, k: number) => numberCell(t.atFields[i]![k]!.shift.div(MHZ), 12),
+        })),
+      ],
+    },
+    first,
+  );
+}
+
+export { termAnchor };
+
+/** Hyperfine lines F → F′ of a line at low field. */
+export function hyperfineGroupsTable(ln: LineResult, groups: HyperfineLineGroup[], home: TableHome): Table {
+  const id = ln.input.id;
+  return makeTable<HyperfineLineGroup>(
+    {
+      id: `hfl:${id}`,
+      caption: `${id}: hyperfine lines F → F′ at low field`,
+      csvPath: `${home.csvBase}/line-${safeFile(id)}-hyperfine.csv`,
+      exportUrl: home.exportUrl,
+      anchor: (g) => hyperfineGroupAnchor(id, g.Fu2, g.Fl2),
+      columns: [
+        { key: "Fu", label: "F upper", kind: "quantum", cell: (g) => quantumCell(g.Fu2) },
+        { key: "Fl", label: "F lower", kind: "quantum", cell: (g) => quantumCell(g.Fl2) },
+        { key: "S", label: "strength (of line)", kind: "fraction", cell: (g) => fractionCell(g.strength) },
+        { key: "Sl", label: "share of lower F", kind: "fraction", cell: (g) => fractionCell(g.shareOfLower) },
+        { key: "off", label: "offset from line centre", unit: "MHz", kind: "number", cell: (g) => numberCell(g.offset.div(MHZ), 10) },
+        { key: "gFu", label: "gF upper", kind: "number", cell: (g) => numberCell(g.gFu, 9) },
+        { key: "gFl", label: "gF lower", kind: "number", cell: (g) => numberCell(g.gFl, 9) },
+      ],
+    },
+    groups,
+  );
+}
+
+/** Hyperfine Zeeman components (F, mF) → (F′, mF′) of a line at low field. */
+export function hyperfineComponentsTable(ln: LineResult, groups: HyperfineLineGroup[], home: TableHome): Table {
+  const id = ln.input.id;
+  const rows = groups.flatMap((g) => g.components.map((c) => ({ g, c })));
+  return makeTable<(typeof rows)[number]>(
+    {
+      id: `hfc:${id}`,
+      caption: `${id}: hyperfine Zeeman components at low field (cycling lines marked)`,
+      csvPath: `${home.csvBase}/line-${safeFile(id)}-hyperfine-components.csv`,
+      exportUrl: home.exportUrl,
+      anchor: ({ g, c }) => hyperfineComponentAnchor(id, g.Fu2, c.mFu2, g.Fl2, c.mFl2),
+      columns: [
+        { key: "Fu", label: "F upper", kind: "quantum", cell: ({ g }) => quantumCell(g.Fu2) },
+        { key: "mFu", label: "mF upper", kind: "quantum", cell: ({ c }) => quantumCell(c.mFu2, true) },
+        { key: "Fl", label: "F lower", kind: "quantum", cell: ({ g }) => quantumCell(g.Fl2) },
+        { key: "mFl", label: "mF lower", kind: "quantum", cell: ({ c }) => quantumCell(c.mFl2, true) },
+        { key: "pol", label: "polarization", kind: "text", cell: ({ c }) => textCell(polarizationSymbol(c.polarization)) },
+        { key: "S", label: "strength (of line)", kind: "fraction", cell: ({ c }) => fractionCell(c.strength) },
+        { key: "shift", label: "shift", unit: "MHz/G", kind: "number", cell: ({ c }) => numberCell(c.shiftHzPerT.mul("1e-10"), 9) },
+        { key: "cyc", label: "cycling", kind: "text", cell: ({ c }) => textCell(c.cycling ? "cycling" : "") },
+      ],
+    },
+    rows,
+  );
+}
+
+/** The components of a line at one bias field, with their states, strengths and shifts. */
+export function atFieldTable(ln: LineResult, a: LineAtFieldResult, home: TableHome): Table {
+  const id = ln.input.id;
+  const tesla = exportText(a.field.tesla, 30);
+  const wavelength = ln.input.wavelength;
+  return makeTable<LineComponentAtField>(
+    {
+      id: `atB:${id}:${tesla}T`,
+      caption: `${id} at ${a.field.text}: components (${a.model})`,
+      csvPath: `${home.csvBase}/line-${safeFile(id)}-B-${safeFile(a.field.text)}.csv`,
+      exportUrl: home.exportUrl,
+      anchor: (c) => componentAtFieldAnchor(id, tesla, c.upperLabel, c.lowerLabel),
+      columns: [
+        { key: "upper", label: "upper state", kind: "text", cell: (c) => textCell(c.upperLabel.replace(/-/g, "−")) },
+        { key: "lower", label: "lower state", kind: "text", cell: (c) => textCell(c.lowerLabel.replace(/-/g, "−")) },
+        { key: "pol", label: "polarization", kind: "text", cell: (c) => textCell(polarizationSymbol(c.polarization)) },
+        { key: "strength", label: "relative strength", kind: "number", cell: (c) => numberCell(c.strength, 6) },
+        { key: "shift", label: "shift from line centre", unit: "MHz", kind: "number", cell: (c) => numberCell(c.shiftHz.div(MHZ), 10) },
+        {
+          key: "dl", label: "wavelength shift", unit: "pm", kind: "number",
+          cell: (c) => numberCell(wavelength && ln.frequencyHz ? c.shiftHz.neg().mul(wavelength.si).div(ln.frequencyHz).mul("1e12") : null, 6),
+        },
+      ],
+    },
+    a.components,
+  );
+}
+
+/** The stick plot of a line at one bias field. */
+export function atFieldPlot(ln: LineResult, a: LineAtFieldResult): string {
+  const id = ln.input.id;
+  return stickPlotSvg({
+    id: `sticks-${safeFile(id)}-${safeFile(a.field.text)}`,
+    title: `${id} at ${a.field.text}`,
+    description: `Zeeman components of ${id} at ${a.field.text}: position from the zero-field line centre and relative strength; π solid, σ dashed.`,
+    sticks: a.components.map((c) => ({ shift: c.shiftHz, strength: c.strength, polarization: c.polarization })),
+    wavelength: ln.input.wavelength?.si ?? null,
+    speedOfLight: SPEED_OF_LIGHT,
+  });
+}

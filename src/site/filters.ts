@@ -1,0 +1,17 @@
+/**
+ * The template filters, one record shared by Eleventy (eleventyPlugin.ts)
+ * and the standalone Nunjucks environment that renders species pages
+ * (src/build/renderPages.ts), so both kinds of page are written alike.
+ */
+import { relativeUrl } from "./relativeUrl.js";
+import { tableRowsHtml } from "./tableRows.js";
+import type { Table } from "./table.js";
+
+export const atlasFilters = {
+  // The <tr> rows of a table model, as HTML (output with | safe; every value escaped inside).
+  tableRows: (table: Table): string => tableRowsHtml(table),
+  // A value as JSON for an inline data attribute.
+  toJson: (value: unknown): string => JSON.stringify(value),
+  // The relative path from a page to the site root ("./", "../../"), for <body data-root> (finder links).
+  rootPath: (pageUrl: string): string => relativeUrl("/index.html", pageUrl).replace(/index\.html$/, "") || "./",
+} as const;

@@ -1,0 +1,261 @@
+/**
+ * Tables of the linear (weak-field) numbers of a species: levels, sublevel
+ * shifts per mJ, hyperfine levels F and sublevels (F, mF), the at-a-glance
+ * table, lines with their patterns, and each line's J-resolved components.
+ * Each is a makeTable spec (tableSpec.ts) over rows of the results.
+ */
+import { Dec, exportText } from "../physics/decimal.js";
+import { hzPerTeslaToGHzPerTesla, hzPerTeslaToMHzPerGauss, hzPerTeslaToWavenumberPerTesla } from "../physics/zeeman.js";
+import { formatDoubled } from "../physics/quantum.js";
+import type { Quantity } from "../data/model.js";
+import type { HyperfineLevelResult, LevelResult, LineResult, SpeciesResult } from "../results/types.js";
+import { componentAnchor, hyperfineAnchor, levelAnchor, levelShiftsAnchor, lineAnchor, mFAnchor, mJAnchor } from "./anchors.js";
+import { formatQuantum, polarizationSymbol, writtenDigits } from "./format.js";
+import { levelPagePath, linePagePath } from "./pageUrls.js";
+import { fractionCell, measuredCell, numberCell, quantumCell, termCell, textCell, type Cell, type Table } from "./table.js";
+import { makeTable, type ColumnSpec } from "./tableSpec.js";
+
+/** Significant digits shown for shifts and g values on pages. */
+export const SHOWN_DIGITS = 9;
+
+const MHZ = new Dec("1e6");
+
+/** Where a species' tables keep their CSV files and which export holds the same rows. */
+export interface TableHome {
+  speciesId: string;
+  csvBase: string;
+  exportUrl: string;
+}
+
+/** The three shift columns (MHz/G switchable by the reader, GHz/T, cm⁻¹/T) of a row's shift in Hz/T. */
+export function shiftColumns<R>(hzPerT: (r: R) => Dec): ColumnSpec<R>[] {
+  return [
+    {
+      key: "shift", label: "shift", unit: "MHz/G", kind: "number", switchable: true,
+      cell: (r) => numberCell(hzPerTeslaToMHzPerGauss(hzPerT(r)), SHOWN_DIGITS, { hzPerT: exportText(hzPerT(r), 30) }),
+    },
+    { key: "shift_GHz_T", label: "shift", unit: "GHz/T", kind: "number", cell: (r) => numberCell(hzPerTeslaToGHzPerTesla(hzPerT(r)), SHOWN_DIGITS) },
+    { key: "shift_cm_T", label: "shift", unit: "cm⁻¹/T", kind: "number", cell: (r) => numberCell(hzPerTeslaToWavenumberPerTesla(hzPerT(r)), SHOWN_DIGITS) },
+  ];
+}
+
+function gUsedCell(l: LevelResult): Cell {
+  if (l.gJ === null) return { text: "—", sort: "" };
+  if (l.gJFrom === "measured" && l.input.gJ) return measuredCell(l.input.gJ, l.gJ);
+  return numberCell(l.gJ, SHOWN_DIGITS);
+}
+
+/**
+ * A measured quantity in the column's unit: as written when the data file
+ * used that unit, else converted and shown with the written number of
+ * significant digits (no digits invented by the conversion).
+ */
+export function quantityCell(q: Quantity | null | undefined, unit: string, siPerUnit: string): Cell {
+  if (!q) return numberCell(null);
+  const numberText = q.text.trim().slice(0, q.text.trim().length - q.unit.length).trim();
+  const value = q.si.div(siPerUnit);
+  if (q.unit === unit) return measuredCell(q, value, numberText);
+  return numberCell(value, writtenDigits(numberText));
+}
+
+/** Levels of a species; the id links to the level's own page where it has one, else to its shifts. */
+export function levelsTable(s: SpeciesResult, home: TableHome, hasPage: (l: LevelResult) => boolean): Table {
+  return makeTable<LevelResult>(
+    {
+      id: "levels",
+      caption: "Levels",
+      csvPath: `${home.csvBase}/levels.csv`,
+      exportUrl: home.exportUrl,
+      anchor: (l) => levelAnchor(l.input.id),
+      columns: [
+        {
+          key: "id", label: "level", kind: "text",
+          cell: (l) => textCell(l.input.id, hasPage(l) ? `/${levelPagePath(home.speciesId, l.input.id)}` : `#${levelShiftsAnchor(l.input.id)}`),
+        },
+        { key: "config", label: "configuration", kind: "text", cell: (l) => textCell(l.input.config) },
+        { key: "term", label: "term", kind: "term", cell: (l) => termCell(l.input.term) },
+        { key: "J", label: "J", kind: "quantum", cell: (l) => quantumCell(l.J2) },
+        { key: "gJ_exact", label: "gJ (LS, exact)", kind: "fraction", cell: (l) => fractionCell(l.gJExact) },
+        { key: "gJ", label: "gJ in use", kind: "number", cell: gUsedCell },
+        { key: "gJ_from", label: "gJ from", kind: "text", cell: (l) => textCell(l.gJFrom === "measured" ? "measured" : l.gJFrom === "LS" ? "LS, gL and gS" : "J = 0") },
+        { key: "A", label: "A", unit: "MHz", kind: "number", cell: (l) => quantityCell(l.input.hyperfine?.A, "MHz", "1e6") },
+        { key: "B", label: "B", unit: "MHz", kind: "number", cell: (l) => quantityCell(l.input.hyperfine?.B, "MHz", "1e6") },
+        { key: "source", label: "source", kind: "text", cell: (l) => textCell(l.input.source) },
+      ],
+    },
+    s.levels,
+  );
+}
+
+/** The linear shift of every mJ of a level. */
+export function mJTable(l: LevelResult, home: TableHome, base: string): Table {
+  const lid = l.input.id;
+  return makeTable(
+    {
+      id: `mj:${lid}`,
+      caption: `${l.input.term.text} (${lid}): sublevels mJ, linear shift`,
+      csvPath: `${base}-mJ.csv`,
+      exportUrl: home.exportUrl,
+      anchor: (m) => mJAnchor(lid, m.m2),
+      columns: [
+        { key: "mJ", label: "mJ", kind: "quantum", cell: (m) => quantumCell(m.m2, true) },
+        { key: "gm", label: "gJ·mJ", kind: "number", cell: (m) => numberCell(l.gJ === null ? new Dec(0) : l.gJ.mul(m.m2).div(2), SHOWN_DIGITS) },
+        ...shiftColumns<(typeof l.sublevels)[number]>((m) => m.shiftHzPerT),
+      ],
+    },
+    l.sublevels,
+  );
+}
+
+/** The hyperfine levels F of a level: gF and zero-field position. */
+export function hyperfineTable(l: LevelResult, home: TableHome, base: string): Table {
+  const lid = l.input.id;
+  return makeTable<HyperfineLevelResult>(
+    {
+      id: `hf:${lid}`,
+      caption: `${l.input.term.text} (${lid}): hyperfine levels F`,
+      csvPath: `${base}-F.csv`,
+      exportUrl: home.exportUrl,
+      anchor: (h) => hyperfineAnchor(lid, h.F2),
+      columns: [
+        { key: "F", label: "F", kind: "quantum", cell: (h) => quantumCell(h.F2) },
+        { key: "gF", label: "gF", kind: "number", cell: (h) => numberCell(h.gF, 12) },
+        { key: "E0", label: "zero-field energy", unit: "MHz", kind: "number", cell: (h) => numberCell(h.zeroFieldHz.div(MHZ), 12) },
+      ],
+    },
+    l.hyperfine,
+  );
+}
+
+/** Every sublevel (F, mF) of a level with its linear shift. */
+export function hyperfineSublevelsTable(l: LevelResult, home: TableHome, base: string): Table {
+  const lid = l.input.id;
+  const rows = l.hyperfine.flatMap((h) => h.sublevels.map((m) => ({ h, m })));
+  return makeTable<(typeof rows)[number]>(
+    {
+      id: `mf:${lid}`,
+      caption: `${l.input.term.text} (${lid}): sublevels (F, mF), linear shift`,
+      csvPath: `${base}-mF.csv`,
+      exportUrl: home.exportUrl,
+      anchor: ({ h, m }) => mFAnchor(lid, h.F2, m.m2),
+      columns: [
+        { key: "F", label: "F", kind: "quantum", cell: ({ h }) => quantumCell(h.F2) },
+        { key: "mF", label: "mF", kind: "quantum", cell: ({ m }) => quantumCell(m.m2, true) },
+        { key: "gF", label: "gF", kind: "number", cell: ({ h }) => numberCell(h.gF, SHOWN_DIGITS) },
+        ...shiftColumns<(typeof rows)[number]>(({ m }) => m.shiftHzPerT),
+      ],
+    },
+    rows,
+  );
+}
+
+/** One row of the at-a-glance table: a level (J) or one of its hyperfine levels (F). */
+interface GlanceRow {
+  level: LevelResult;
+  hf: HyperfineLevelResult | null;
+}
+
+/**
+ * At a glance: every level with its gJ and, per hyperfine level, gF, the
+ * linear shift per unit m (in the reader's chosen unit) and the zero-field
+ * position. The shift per unit m is g·μB/h, the shift of the m = 1 sublevel.
+ */
+export function glanceTable(s: SpeciesResult, home: TableHome, muB_h: Dec): Table {
+  const rows: GlanceRow[] = s.levels.flatMap((level) => [{ level, hf: null }, ...level.hyperfine.map((hf) => ({ level, hf }))]);
+  const g = (r: GlanceRow): Dec | null => (r.hf ? r.hf.gF : r.level.gJ);
+  return makeTable<GlanceRow>(
+    {
+      id: "glance",
+      caption: "At a glance: g factors and linear shift per unit m",
+      csvPath: `${home.csvBase}/glance.csv`,
+      exportUrl: home.exportUrl,
+      anchor: (r) => `glance:${r.hf ? hyperfineAnchor(r.level.input.id, r.hf.F2) : levelAnchor(r.level.input.id)}`,
+      columns: [
+        { key: "level", label: "level", kind: "text", cell: (r) => (r.hf ? textCell("") : textCell(r.level.input.id, `#${levelAnchor(r.level.input.id)}`)) },
+        { key: "term", label: "term", kind: "term", cell: (r) => (r.hf ? textCell("") : termCell(r.level.input.term)) },
+        { key: "which", label: "J or F", kind: "text", cell: (r) => textCell(r.hf ? `F = ${formatQuantum(r.hf.F2)}` : `J = ${formatQuantum(r.level.J2)}`) },
+        { key: "g", label: "gJ or gF", kind: "number", cell: (r) => (g(r) === null ? textCell("—") : r.hf ? numberCell(r.hf.gF, SHOWN_DIGITS) : gUsedCell(r.level)) },
+        {
+          key: "per_m", label: "shift per unit m", unit: "MHz/G", kind: "number", switchable: true,
+          cell: (r) => {
+            const gv = g(r);
+            if (gv === null) return numberCell(null);
+            const hzPerT = gv.mul(muB_h);
+            return numberCell(hzPerTeslaToMHzPerGauss(hzPerT), SHOWN_DIGITS, { hzPerT: exportText(hzPerT, 30) });
+          },
+        },
+        { key: "E0", label: "zero-field position", unit: "MHz", kind: "number", cell: (r) => numberCell(r.hf ? r.hf.zeroFieldHz.div(MHZ) : null, 12) },
+      ],
+    },
+    rows,
+  );
+}
+
+/** Lines with their pattern; the id links to the line's own page. */
+export function linesTable(s: SpeciesResult, home: TableHome): Table {
+  return makeTable<LineResult>(
+    {
+      id: "lines",
+      caption: "Lines",
+      csvPath: `${home.csvBase}/lines.csv`,
+      exportUrl: home.exportUrl,
+      anchor: (ln) => lineAnchor(ln.input.id),
+      columns: [
+        { key: "id", label: "line", kind: "text", cell: (ln) => textCell(ln.input.id, `/${linePagePath(home.speciesId, ln.input.id)}`) },
+        { key: "upper", label: "upper", kind: "text", cell: (ln) => textCell(ln.upper.input.id, `#${levelAnchor(ln.upper.input.id)}`) },
+        { key: "lower", label: "lower", kind: "text", cell: (ln) => textCell(ln.lower.input.id, `#${levelAnchor(ln.lower.input.id)}`) },
+        { key: "multipole", label: "multipole", kind: "text", cell: (ln) => textCell(ln.input.multipole) },
+        { key: "wavelength", label: "λ (vacuum)", unit: "nm", kind: "number", cell: (ln) => quantityCell(ln.input.wavelength, "nm", "1e-9") },
+        { key: "g_eff", label: "g_eff", kind: "number", cell: (ln) => numberCell(ln.gEff, SHOWN_DIGITS) },
+        { key: "pattern", label: "pattern", kind: "text", cell: (ln) => textCell(ln.pattern ?? "—") },
+        { key: "summary", label: "reading", kind: "text", cell: (ln) => textCell(ln.summary) },
+      ],
+    },
+    s.lines,
+  );
+}
+
+/** The J-resolved Zeeman components of a line, with exact strengths and shifts. */
+export function componentsTable(ln: LineResult, home: TableHome): Table {
+  const id = ln.input.id;
+  return makeTable<(typeof ln.components)[number]>(
+    {
+      id: `cmp:${id}`,
+      caption: `${id} (${ln.upper.input.term.text} → ${ln.lower.input.term.text}): Zeeman components`,
+      csvPath: `${home.csvBase}/line-${safeFile(id)}.csv`,
+      exportUrl: home.exportUrl,
+      anchor: (c) => componentAnchor(id, c.mu2, c.ml2),
+      columns: [
+        { key: "mu", label: "m upper", kind: "quantum", cell: (c) => quantumCell(c.mu2, true) },
+        { key: "ml", label: "m lower", kind: "quantum", cell: (c) => quantumCell(c.ml2, true) },
+        { key: "dm", label: "Δm", kind: "quantum", cell: (c) => quantumCell(c.deltaM * 2, true) },
+        { key: "pol", label: "polarization", kind: "text", cell: (c) => textCell(polarizationSymbol(c.polarization)) },
+        { key: "strength", label: "strength", kind: "fraction", cell: (c) => fractionCell(c.strength) },
+        { key: "lorentz_exact", label: "shift, LS exact", unit: "Lorentz units", kind: "fraction", cell: (c) => fractionCell(c.shiftLorentzExact) },
+        { key: "lorentz", label: "shift", unit: "Lorentz units", kind: "number", cell: (c) => numberCell(c.shiftLorentz, SHOWN_DIGITS) },
+        ...shiftColumns<(typeof ln.components)[number]>((c) => c.shiftHzPerT),
+      ],
+    },
+    ln.components,
+  );
+}
+
+/** Zero-field hyperfine intervals of a level, "F = 1 ↔ 2: 6 834.682 610 9 MHz", adjacent F only. */
+export function hyperfineIntervals(l: LevelResult): { F: string; Fp: string; mhz: Cell }[] {
+  const byF = [...l.hyperfine].sort((a, b) => a.F2 - b.F2);
+  const out: { F: string; Fp: string; mhz: Cell }[] = [];
+  for (let i = 1; i < byF.length; i++) {
+    out.push({ F: formatDoubled(byF[i - 1]!.F2), Fp: formatDoubled(byF[i]!.F2), mhz: numberCell(byF[i]!.zeroFieldHz.sub(byF[i - 1]!.zeroFieldHz).div(MHZ), 12) });
+  }
+  return out;
+}
+
+/** A file-name-safe form of an id; injective (every non-[A-Za-z0-9-] byte is hex-escaped with "_"). */
+export function safeFile(id: string): string {
+  return [...new TextEncoder().encode(id)]
+    .map((b) => {
+      const ch = String.fromCharCode(b);
+      return /[A-Za-z0-9-]/.test(ch) ? ch : "_" + b.toString(16).padStart(2, "0");
+    })
+    .join("");
+}

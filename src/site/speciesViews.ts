@@ -1,0 +1,352 @@
+/**
+ * The page view models of one species: an overview, one page per level with
+ * hyperfine structure, one page per line, and (only for a line whose page
+ * would be too large) one page per line and bias field. Each holds plain
+ * rows (tables, sentences, SVG text) and links; templates read nothing else.
+ *
+ * What goes where: the overview answers first (at a glance, then the linear
+ * tables, the line patterns and the energies at the bias fields); the level
+ * and line pages hold what is large (plots, transitions, components at
+ * every field). Row ids keep the form they had when everything was on one
+ * page, so the overview's forwarding map (forwarding.ts) can send an old
+ * link on to the page that now holds its row.
+ */
+import { exportText, type Dec } from "../physics/decimal.js";
+import { formatDoubled } from "../physics/quantum.js";
+import type { SpeciesFieldResult } from "../results/computeFields.js";
+import type { ConfiguredField, LineAtFieldResult } from "../results/fieldTypes.js";
+import type { LevelResult, LineResult, SpeciesResult } from "../results/types.js";
+import {
+  levelAnchor,
+  levelFieldSectionAnchor,
+  levelShiftsAnchor,
+  lineAnchor,
+  lineAtFieldAnchor,
+  lineComponentsAnchor,
+  lineFieldsAnchor,
+  termAnchor,
+} from "./anchors.js";
+import {
+  atFieldPlot,
+  atFieldTable,
+  energiesTable,
+  hyperfineComponentsTable,
+  hyperfineGroupsTable,
+  levelPlots,
+  termFacts,
+  termTable,
+  transitionsTable,
+  validityFacts,
+} from "./fieldTables.js";
+import { formatNumber, partsText, writtenParts } from "./format.js";
+import {
+  componentsTable,
+  glanceTable,
+  hyperfineIntervals,
+  hyperfineSublevelsTable,
+  hyperfineTable,
+  levelsTable,
+  linesTable,
+  mJTable,
+  safeFile,
+  SHOWN_DIGITS,
+  type TableHome,
+} from "./linearTables.js";
+import { exportPath, levelPagePath, lineFieldPagePath, linePagePath, sheetPath, speciesPath } from "./pageUrls.js";
+import { patternSketchSvg } from "./plots/patternSketch.js";
+import { termParts, type Cell, type Table, type TermParts } from "./table.js";
+
+/** One step of the breadcrumb trail; the last has no link. */
+export interface Crumb {
+  text: string;
+  href: string | null;
+}
+
+interface PageCommon {
+  /** Page folder relative to the site root ("species/rb87/level/5s-S1_2/"). */
+  path: string;
+  title: string;
+  crumbs: Crumb[];
+  speciesId: string;
+  speciesLabel: string;
+}
+
+export interface OverviewView extends PageCommon {
+  kind: "overview";
+  facts: { label: string; value: string }[];
+  notes: string | null;
+  exportUrl: string;
+  sheetUrl: string;
+  glance: Table;
+  intervals: { levelId: string; items: { F: string; Fp: string; mhz: Cell }[] }[];
+  patterns: { lineId: string; url: string; pattern: string; gEff: string; sketch: string; summary: string }[];
+  levels: Table;
+  shiftSections: { anchor: string; termParts: TermParts; title: string; levelUrl: string | null; tables: Table[] }[];
+  lines: Table;
+  fieldsText: string[];
+  /** Energies per level; a level without a page of its own keeps its field section's anchor here. */
+  energies: { levelId: string; levelUrl: string | null; sectionAnchor: string | null; table: Table }[];
+  terms: { anchor: string; key: string; facts: string[]; table: Table }[];
+  lineLinks: { lineId: string; url: string; summary: string }[];
+}
+
+export interface LevelView extends PageCommon {
+  kind: "level";
+  levelId: string;
+  termParts: TermParts;
+  anchor: string;
+  /** Position of the level in the species (1-based): keeps the plot switch ids of the one-page layout. */
+  axisIndex: number;
+  facts: string[];
+  energies: Table;
+  plots: { linear: string; log: string } | null;
+  transitions: Table | null;
+  /** Where the transitions are when they have a page of their own (the level page would be too large). */
+  transitionsUrl: string | null;
+}
+
+export interface TransitionsView extends PageCommon {
+  kind: "transitions";
+  levelId: string;
+  levelUrl: string;
+  termParts: TermParts;
+  transitions: Table;
+}
+
+export interface AtFieldView {
+  anchor: string;
+  fieldText: string;
+  heading: string;
+  regime: string;
+  model: string;
+  plot: string;
+  /** Null where the components sit at their linear shifts (the J-resolved table says it all). */
+  table: Table | null;
+}
+
+export interface LineView extends PageCommon {
+  kind: "line";
+  lineId: string;
+  heading: string;
+  pattern: string | null;
+  summary: string;
+  components: Table;
+  componentsAnchor: string;
+  fieldsAnchor: string;
+  hyperfine: Table | null;
+  hyperfineComponents: Table | null;
+  /** The line at each bias field, on this page; or null when they have pages of their own (fieldLinks). */
+  atFields: AtFieldView[] | null;
+  fieldLinks: { text: string; url: string; regime: string; model: string }[];
+}
+
+export interface LineFieldView extends PageCommon {
+  kind: "line-field";
+  lineId: string;
+  lineUrl: string;
+  atField: AtFieldView;
+}
+
+export type PageView = OverviewView | LevelView | TransitionsView | LineView | LineFieldView;
+
+export interface SpeciesViewsInput {
+  result: SpeciesResult;
+  fields: SpeciesFieldResult;
+  configured: ConfiguredField[];
+  muB_h: Dec;
+}
+
+const gIText = (s: SpeciesResult): string => {
+  const written = s.input.nucleus?.gI?.text;
+  const p = written ? writtenParts(written) : null;
+  return p ? partsText(p) : formatNumber(s.gI, 12);
+};
+
+/** Levels that get a page of their own: those with hyperfine structure (field tables, plots, transitions). */
+export const hasLevelPage = (s: SpeciesFieldResult, l: LevelResult): boolean => s.levels.get(l.input.id)!.validity !== null;
+
+export function overviewView(v: SpeciesViewsInput): OverviewView {
+  const s = v.result;
+  const id = s.input.id;
+  const home: TableHome = { speciesId: id, csvBase: `species/${id}/csv`, exportUrl: exportPath(id) };
+  const levelUrl = (l: LevelResult) => (hasLevelPage(v.fields, l) ? `/${levelPagePath(id, l.input.id)}` : null);
+  const nucleus = s.input.nucleus;
+  const facts = [
+    ...(nucleus ? [{ label: "nuclear spin I", value: formatDoubled(nucleus.I2) }, { label: `gI (${s.gIFrom === "moment" ? "from μ" : "given"})`, value: gIText(s) }] : []),
+    ...(s.input.mass ? [{ label: "mass", value: s.input.mass.text }] : []),
+    { label: "gL", value: formatNumber(s.gL, 12) },
+    { label: "gS", value: formatNumber(s.gS, 15) },
+  ];
+  return {
+    kind: "overview",
+    path: speciesPath(id),
+    title: s.input.label,
+    crumbs: [{ text: "Species", href: "/" }, { text: s.input.label, href: null }],
+    speciesId: id,
+    speciesLabel: s.input.label,
+    facts,
+    notes: s.input.notes ?? null,
+    exportUrl: exportPath(id),
+    sheetUrl: sheetPath(id),
+    glance: glanceTable(s, home, v.muB_h),
+    intervals: s.levels.filter((l) => l.hyperfine.length > 1).map((l) => ({ levelId: l.input.id, items: hyperfineIntervals(l) })),
+    patterns: s.lines.map((ln) => ({
+      lineId: ln.input.id,
+      url: `/${linePagePath(id, ln.input.id)}`,
+      pattern: ln.pattern ?? "—",
+      gEff: formatNumber(ln.gEff, SHOWN_DIGITS),
+      summary: ln.summary,
+      sketch: patternSketchSvg(`sketch-${safeFile(ln.input.id)}`, ln.input.id, ln.components.map((c) => ({ lorentz: c.shiftLorentz, strength: c.strength.toDecimal(), polarization: c.polarization }))),
+    })),
+    levels: levelsTable(s, home, (l) => hasLevelPage(v.fields, l)),
+    shiftSections: s.levels.map((l) => {
+      const base = `${home.csvBase}/level-${safeFile(l.input.id)}`;
+      return {
+        anchor: levelShiftsAnchor(l.input.id),
+        termParts: termParts(l.input.term),
+        title: l.input.id,
+        levelUrl: levelUrl(l),
+        tables: [mJTable(l, home, base), ...(l.hyperfine.length > 0 ? [hyperfineTable(l, home, base), hyperfineSublevelsTable(l, home, base)] : [])],
+      };
+    }),
+    lines: linesTable(s, home),
+    fieldsText: v.configured.map((f) => f.text),
+    energies: s.levels.map((l) => ({
+      levelId: l.input.id,
+      levelUrl: levelUrl(l),
+      sectionAnchor: levelUrl(l) ? null : levelFieldSectionAnchor(l.input.id),
+      table: energiesTable(l, v.fields.levels.get(l.input.id)!, v.configured, home, false),
+    })),
+    terms: v.fields.terms.map((t) => ({ anchor: termAnchor(t.key), key: t.key, facts: termFacts(t), table: termTable(t, v.configured, home) })),
+    lineLinks: s.lines.map((ln) => ({ lineId: ln.input.id, url: `/${linePagePath(id, ln.input.id)}`, summary: ln.summary })),
+  };
+}
+
+/**
+ * The level pages of a species. `split(levelId)` says whether a level's
+ * sublevel transitions go to a page of their own (asked after rendering the
+ * whole page once and finding it too large); then that page's view comes too.
+ */
+export function levelViews(v: SpeciesViewsInput, split: (levelId: string) => boolean = () => false): { levels: LevelView[]; transitions: TransitionsView[] } {
+  const s = v.result;
+  const id = s.input.id;
+  const home: TableHome = { speciesId: id, csvBase: `species/${id}/csv`, exportUrl: exportPath(id) };
+  const levels: LevelView[] = [];
+  const transitions: TransitionsView[] = [];
+  s.levels.forEach((l, i) => {
+    if (!hasLevelPage(v.fields, l)) return;
+    const f = v.fields.levels.get(l.input.id)!;
+    const path = levelPagePath(id, l.input.id);
+    const crumbs = [
+      { text: "Species", href: "/" },
+      { text: s.input.label, href: `/${speciesPath(id)}#${levelAnchor(l.input.id)}` },
+    ];
+    const table = transitionsTable(l, f, v.configured, home);
+    const separate = table !== null && split(l.input.id);
+    levels.push({
+      kind: "level",
+      path,
+      title: `${s.input.label} ${l.input.id}`,
+      crumbs: [...crumbs, { text: l.input.id, href: null }],
+      speciesId: id,
+      speciesLabel: s.input.label,
+      levelId: l.input.id,
+      termParts: termParts(l.input.term),
+      anchor: levelFieldSectionAnchor(l.input.id),
+      axisIndex: i + 1,
+      facts: validityFacts(f),
+      energies: energiesTable(l, f, v.configured, home, true),
+      plots: levelPlots(l, f, v.configured),
+      transitions: separate ? null : table,
+      transitionsUrl: separate ? `/${path}transitions/` : null,
+    });
+    if (separate) {
+      transitions.push({
+        kind: "transitions",
+        path: `${path}transitions/`,
+        title: `${s.input.label} ${l.input.id} transitions`,
+        crumbs: [...crumbs, { text: l.input.id, href: `/${path}` }, { text: "transitions", href: null }],
+        speciesId: id,
+        speciesLabel: s.input.label,
+        levelId: l.input.id,
+        levelUrl: `/${path}`,
+        termParts: termParts(l.input.term),
+        transitions: table,
+      });
+    }
+  });
+  return { levels, transitions };
+}
+
+function atFieldView(ln: LineResult, a: LineAtFieldResult, home: TableHome): AtFieldView {
+  const tesla = exportText(a.field.tesla, 30);
+  return {
+    anchor: lineAtFieldAnchor(ln.input.id, tesla),
+    fieldText: a.field.text,
+    heading: `at ${a.field.text}`,
+    regime: a.regime,
+    model: a.model,
+    plot: atFieldPlot(ln, a),
+    table: a.model === "J-resolved linear pattern" ? null : atFieldTable(ln, a, home),
+  };
+}
+
+/**
+ * The line pages of a species. `split(lineId)` says whether a line's fields
+ * go to pages of their own (the build asks after rendering the whole page
+ * once and finding it too large); then the per-field views come too.
+ */
+export function lineViews(v: SpeciesViewsInput, split: (lineId: string) => boolean): { lines: LineView[]; lineFields: LineFieldView[] } {
+  const s = v.result;
+  const id = s.input.id;
+  const home: TableHome = { speciesId: id, csvBase: `species/${id}/csv`, exportUrl: exportPath(id) };
+  const lines: LineView[] = [];
+  const lineFields: LineFieldView[] = [];
+  for (const ln of s.lines) {
+    const f = v.fields.lines.get(ln.input.id)!;
+    const url = `/${linePagePath(id, ln.input.id)}`;
+    const crumbs = [
+      { text: "Species", href: "/" },
+      { text: s.input.label, href: `/${speciesPath(id)}#${lineAnchor(ln.input.id)}` },
+    ];
+    const positive = f.atFields.filter((a) => a.field.tesla.gt(0));
+    const separate = split(ln.input.id);
+    const atFields = positive.map((a) => atFieldView(ln, a, home));
+    lines.push({
+      kind: "line",
+      path: linePagePath(id, ln.input.id),
+      title: `${s.input.label} ${ln.input.id}`,
+      crumbs: [...crumbs, { text: ln.input.id, href: null }],
+      speciesId: id,
+      speciesLabel: s.input.label,
+      lineId: ln.input.id,
+      heading: `${ln.input.id}: ${ln.upper.input.id} → ${ln.lower.input.id}`,
+      pattern: ln.pattern,
+      summary: ln.summary,
+      components: componentsTable(ln, home),
+      componentsAnchor: lineComponentsAnchor(ln.input.id),
+      fieldsAnchor: lineFieldsAnchor(ln.input.id),
+      hyperfine: f.hyperfine ? hyperfineGroupsTable(ln, f.hyperfine, home) : null,
+      hyperfineComponents: f.hyperfine ? hyperfineComponentsTable(ln, f.hyperfine, home) : null,
+      atFields: separate ? null : atFields,
+      fieldLinks: separate
+        ? positive.map((a) => ({ text: a.field.text, url: `/${lineFieldPagePath(id, ln.input.id, exportText(a.field.tesla, 30))}`, regime: a.regime, model: a.model }))
+        : [],
+    });
+    if (!separate) continue;
+    positive.forEach((a, k) => {
+      lineFields.push({
+        kind: "line-field",
+        path: lineFieldPagePath(id, ln.input.id, exportText(a.field.tesla, 30)),
+        title: `${s.input.label} ${ln.input.id} at ${a.field.text}`,
+        crumbs: [...crumbs, { text: ln.input.id, href: url }, { text: a.field.text, href: null }],
+        speciesId: id,
+        speciesLabel: s.input.label,
+        lineId: ln.input.id,
+        lineUrl: url,
+        atField: atFields[k]!,
+      });
+    });
+  }
+  return { lines, lineFields };
+}
