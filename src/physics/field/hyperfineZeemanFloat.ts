@@ -91,3 +91,55 @@ export function hyperfineZeemanFloatSolver(level: HyperfineZeemanLevel | Prepare
     return { energy, slope };
   };
 }
+
+/** One hyperfine–Zeeman sublevel at one field, float64: the float twin of FieldState (no slope). */
+export interface FloatFieldState {
+  /** Doubled F of the zero-field level the state connects to. */
+  F2: number;
+  /** Doubled mF = mJ + mI. */
+  mF2: number;
+  /** Energy E/h in Hz from the hyperfine-free level centre. */
+  energy: number;
+  /** Uncoupled basis of the state's M block, ascending mJ (shared with the prepared block). */
+  basis: PreparedBlock["basis"];
+  /** Normalized eigenvector on `basis` (overall sign arbitrary). */
+  vector: number[];
+  /** The uncoupled state it tends to at high field. */
+  highField: PreparedBlock["basis"][number];
+}
+
+/**
+ * Every sublevel of a prepared level at `tesla` (a float, ≥ 0) with its
+ * eigenvector, in the Dec solver's (F, mF) order and with its labels (same
+ * prepared blocks, same k-th-lowest rule): the float64 twin of
+ * solverForPrepared, for the field calculator (src/engine/), which needs
+ * eigenvectors for line components at any field.
+ *
+ * Formula and labels: as the module comment and hyperfineZeeman.ts. Exact:
+ * no; energies to about 1e-15 of the block's largest |E|, vector components
+ * to about 1e-16·‖H‖/gap; the eigenvector's overall sign is not fixed (line
+ * strengths are squares and do not depend on it). Selection rules: none
+ * (every sublevel is returned).
+ *
+ * Worked example: 87Rb 5²S1/2 at 0 T gives eight states, three F = 1 at
+ * −5A/4 = −4271.676631815… MHz and five F = 2 at 3A/4 = 2563.005979089… MHz;
+ * the last, |F=2, mF=2⟩, is the pure |mJ = 1/2, mI = 3/2⟩ (vector ±[1]).
+ */
+export function solveHyperfineZeemanFloat(prepared: PreparedLevel, tesla: number): FloatFieldState[] {
+  if (!(tesla >= 0)) throw new RangeError("field must be ≥ 0 T (the direction defines the quantization axis)");
+  const out: FloatFieldState[] = new Array(prepared.size);
+  for (const block of prepared.blocks) {
+    const sol = solveBlockFloat(prepared, block, tesla);
+    block.outIndex.forEach((pos, k) => {
+      out[pos] = {
+        F2: block.fByRank[k]!,
+        mF2: block.M2,
+        energy: sol.values[k]!,
+        basis: block.basis,
+        vector: sol.vectors[k]!,
+        highField: block.basis[block.highByRank[k]!]!,
+      };
+    });
+  }
+  return out;
+}

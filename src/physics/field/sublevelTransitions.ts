@@ -111,15 +111,32 @@ interface Pair {
   kind: SublevelTransition["kind"];
 }
 
-/** Every line of the level (see the module comment), with frequencies at `fields` (tesla, ≥ 0). */
-export function sublevelTransitions(level: HyperfineZeemanLevel, fields: readonly Dec[], options: TransitionOptions = {}): SublevelTransition[] {
+/** The transition list of a level: sublevel labels in the solvers' (F, mF) order, and the pairs. */
+export interface TransitionPairs {
+  /** Every sublevel, sorted by F then mF (doubled values ascending): the order of both solvers' output. */
+  labels: SublevelLabel[];
+  /** Zero-field energy of each label, Hz (exact, hyperfine.ts). */
+  zeroField: Dec[];
+  /** First-order slope (μB/h)·gF·mF of each label, Hz/T (exact). */
+  linear: Dec[];
+  /** Each line: indices of its lower and upper sublevel into `labels`, and its kind. */
+  pairs: { lo: number; up: number; kind: SublevelTransition["kind"] }[];
+}
+
+/**
+ * Which sublevel pairs of a level are transitions, and which end is the upper
+ * one (selection rules and orientation in the module comment). Shared by
+ * sublevelTransitions and by the field calculator (src/engine/), so both list
+ * the same lines in the same order. Exact (Rational/Dec comparisons).
+ *
+ * Worked example: 87Rb 5²S1/2 (F = 1, 2) has 19 lines: 15 magnetic-dipole
+ * (4 within F = 2, 2 within F = 1, 9 between F = 1 and 2 with ΔmF = 0, ±1)
+ * and 4 two-photon ones (ΔmF = ±2 between F = 1 and 2); the first listed
+ * has lower |F=1, mF=0⟩ and upper |F=1, mF=−1⟩ (gF(1) < 0).
+ */
+export function sublevelTransitionPairs(level: HyperfineZeemanLevel): TransitionPairs {
   const { I2, J2 } = level;
   const Bq = I2 >= 2 && J2 >= 2 ? level.B : ZERO;
-  const prepared = prepareHyperfineZeeman(level);
-  const solve = solverForPrepared(prepared);
-  // block and rank of each sublevel, indexed like `labels`
-  const where: Slot[] = new Array(prepared.size);
-  for (const b of prepared.blocks) b.outIndex.forEach((pos, rank) => (where[pos] = { block: b, rank }));
   const labels: SublevelLabel[] = [];
   for (const F2 of fValues(I2, J2)) for (let mF2 = -F2; mF2 <= F2; mF2 += 2) labels.push({ F2, mF2 });
   const e0 = labels.map((s) => hyperfineShift(level.A, Bq, I2, J2, s.F2));
@@ -127,7 +144,6 @@ export function sublevelTransitions(level: HyperfineZeemanLevel, fields: readonl
     const g = gF(level.gJ, level.gI, I2, J2, s.F2);
     return g === null ? ZERO : level.muB_h.mul(g).mul(s.mF2).div(2);
   });
-  const quad = labels.map((s) => quadraticZeemanCoefficient(level, s.F2, s.mF2));
   const higher = (i: number, j: number) => e0[i]!.cmp(e0[j]!) || lin[i]!.cmp(lin[j]!) || labels[i]!.mF2 - labels[j]!.mF2;
   const pairs: Pair[] = [];
   for (let i = 0; i < labels.length; i++) {
@@ -144,6 +160,18 @@ export function sublevelTransitions(level: HyperfineZeemanLevel, fields: readonl
       pairs.push({ lo, up, kind });
     }
   }
+  return { labels, zeroField: e0, linear: lin, pairs };
+}
+
+/** Every line of the level (see the module comment), with frequencies at `fields` (tesla, ≥ 0). */
+export function sublevelTransitions(level: HyperfineZeemanLevel, fields: readonly Dec[], options: TransitionOptions = {}): SublevelTransition[] {
+  const prepared = prepareHyperfineZeeman(level);
+  const solve = solverForPrepared(prepared);
+  // block and rank of each sublevel, indexed like `labels`
+  const where: Slot[] = new Array(prepared.size);
+  for (const b of prepared.blocks) b.outIndex.forEach((pos, rank) => (where[pos] = { block: b, rank }));
+  const { labels, zeroField: e0, linear: lin, pairs } = sublevelTransitionPairs(level);
+  const quad = labels.map((s) => quadraticZeemanCoefficient(level, s.F2, s.mF2));
   // states come back from the solvers in the same (F, mF) order as `labels`
   const given = options.statesAtFields;
   if (given && (given.length !== fields.length || given.some((st) => st.length !== prepared.size))) {
