@@ -1,0 +1,127 @@
+/**
+ * Shapes of the field calculator: the engine data the build writes per
+ * species (plain JSON, decimals as strings), and the answer at one field.
+ * The answer has the keys of the JSON export's `field_table` and `at_fields`
+ * entries (src/site/exportJson.ts): numbers (N = number) from the float64
+ * engine, decimal strings (N = string) from the exact `npm run at`.
+ */
+import type { Polarization } from "../physics/linePattern.js";
+import type { LineModel } from "../results/lineModel.js";
+import type { Regime } from "../results/fieldTypes.js";
+
+export const ENGINE_FORMAT = "sublevel-atlas/engine@1";
+
+/** One level as the engine needs it: the hyperfine–Zeeman solver's inputs and the regime limits. */
+export interface EngineLevel {
+  id: string;
+  /** Doubled J and I (I2 = 0: no hyperfine structure in the solver). */
+  J2: number;
+  I2: number;
+  /** gJ, gI, A/h (Hz), B/h (Hz), as decimal strings: the solver's own inputs (computeFields' solverLevel). */
+  gJ: string;
+  gI: string;
+  A: string;
+  B: string;
+  /** Field (T) up to which the linear shifts are within 1 % (validity.ts), or null (no limit). */
+  linearUpToT: string | null;
+  /** Hyperfine Paschen–Back scale (T), or null. */
+  paschenBackT: string | null;
+  /** The level's term symbol as written in the data, e.g. "2P°3/2" (for captions). */
+  term: string;
+  /** Key of the treated fine-structure term the level belongs to, or null. */
+  fineStructureTerm: string | null;
+  /** Doubled S and L (ordinary integer) of the level's term. */
+  S2: number;
+  L: number;
+}
+
+/** A treated fine-structure term: the fine-structure solver's inputs and the regime limits. */
+export interface EngineTerm {
+  key: string;
+  S2: number;
+  L: number;
+  /** Partner levels: id, doubled J, energy (Hz, decimal string). */
+  partners: { level: string; J2: number; energy: string }[];
+  gL: string;
+  gS: string;
+  /** First field (T) where the J-resolved linear pattern is off by 1 %, or null. */
+  limitT: string | null;
+  /** Fine-structure Paschen–Back scale (T), or null. */
+  paschenBackT: string | null;
+}
+
+/** One component of the J-resolved linear pattern (the model used when no level of the line mixes). */
+export interface EngineLinearComponent {
+  mu2: number;
+  ml2: number;
+  deltaM: number;
+  polarization: Polarization;
+  /** Exact strength as a fraction "p/q" (or an integer). */
+  strength: string;
+  /** Shift per tesla, Hz/T (decimal string). */
+  shiftHzPerT: string;
+}
+
+export interface EngineLine {
+  id: string;
+  upper: string;
+  lower: string;
+  multipole: "E1" | "M1" | "E2";
+  /** Multipole rank k. */
+  k: number;
+  linear: EngineLinearComponent[];
+}
+
+/** Everything the float64 engine needs for one species; JSON-able. */
+export interface EngineData {
+  format: typeof ENGINE_FORMAT;
+  id: string;
+  label: string;
+  /** Constants edition name and the μB/h (Hz/T) taken from it. */
+  constants: string;
+  muB_h: string;
+  /** The build's configured bias fields, as written and in tesla. */
+  fields: { text: string; tesla: string }[];
+  levels: EngineLevel[];
+  terms: EngineTerm[];
+  lines: EngineLine[];
+}
+
+export interface AtState<N> {
+  F: string;
+  mF: string;
+  E_Hz: N;
+  high_field: { mJ: string; mI: string };
+}
+
+export interface AtTransition<N> {
+  level: string;
+  lower: { F: string; mF: string };
+  upper: { F: string; mF: string };
+  kind: "magnetic-dipole" | "two-photon";
+  Hz: N;
+}
+
+export interface AtComponent<N> {
+  upper: string;
+  lower: string;
+  delta_m: number;
+  polarization: Polarization;
+  relative_strength: N;
+  shift_Hz: N;
+}
+
+export interface AtLine<N> {
+  id: string;
+  model: LineModel;
+  regime: Regime;
+  components: AtComponent<N>[];
+}
+
+/** Every number of a species at one field. */
+export interface AtResult<N> {
+  B_T: N;
+  levels: { id: string; states: AtState<N>[] }[];
+  transitions: AtTransition<N>[];
+  lines: AtLine<N>[];
+}

@@ -1,0 +1,94 @@
+/**
+ * Which regime a level is in at a field, and which states a line's
+ * components are taken from: the one rule shared by the exact build
+ * (computeFields.ts, 60-digit Dec) and the float64 field calculator
+ * (src/engine/), so that both pick the same model for every line at every
+ * field. Pure; no physics values of its own.
+ *
+ * Rule (a convention of this project, stated on the Methods page):
+ *  - a level is in the "zero field" regime at B = 0; in "linear Zeeman" up to
+ *    and including the field where its linear shifts stop being within 1 %
+ *    (validity.ts for hyperfine levels, linearPatternLimit for fine-structure
+ *    terms; no limit means linear at every field); in "Paschen–Back" from
+ *    PASCHEN_BACK_FACTOR times its Paschen–Back scale on; "intermediate" between.
+ *  - a line is in the stronger regime of its two levels (hyperfine and fine
+ *    structure both counted).
+ *  - its components come from the fine-structure Paschen–Back eigenstates when
+ *    the fine-structure regime of either level is beyond linear, one of them
+ *    belongs to a treated fine-structure term, both have the same spin and the
+ *    line is not M1; else from the hyperfine–Zeeman eigenstates when both
+ *    levels have hyperfine structure; else from the J-resolved linear pattern.
+ */
+import type { Dec } from "../physics/decimal.js";
+import type { LineAtFieldResult, Regime } from "./fieldTypes.js";
+
+/** A level counts as Paschen–Back from this multiple of its Paschen–Back scale on. */
+export const PASCHEN_BACK_FACTOR = 10;
+
+export type LineModel = LineAtFieldResult["model"];
+
+const RANK: Regime[] = ["zero field", "linear Zeeman", "intermediate", "Paschen–Back"];
+
+/** The regime from where the field lies against the level's limits (see the module comment). */
+function regimeFrom(zero: boolean, withinLinear: boolean, pastPaschenBack: boolean): Regime {
+  if (zero) return "zero field";
+  if (withinLinear) return "linear Zeeman";
+  if (pastPaschenBack) return "Paschen–Back";
+  return "intermediate";
+}
+
+/** Regime of one level at one field (Dec), from the limits computed for it; null limits: none. */
+export function levelRegime(tesla: Dec, linearUpTo: Dec | null, paschenBack: Dec | null): Regime {
+  return regimeFrom(
+    tesla.isZero(),
+    linearUpTo === null || tesla.lte(linearUpTo),
+    paschenBack !== null && tesla.gte(paschenBack.mul(PASCHEN_BACK_FACTOR)),
+  );
+}
+
+/** levelRegime for a float64 field and float64 limits (the field calculator). */
+export function levelRegimeFloat(tesla: number, linearUpTo: number | null, paschenBack: number | null): Regime {
+  return regimeFrom(
+    tesla === 0,
+    linearUpTo === null || tesla <= linearUpTo,
+    paschenBack !== null && tesla >= paschenBack * PASCHEN_BACK_FACTOR,
+  );
+}
+
+/** The stronger of two regimes (zero field < linear Zeeman < intermediate < Paschen–Back). */
+export function strongerRegime(a: Regime, b: Regime): Regime {
+  return RANK.indexOf(a) >= RANK.indexOf(b) ? a : b;
+}
+
+/** One level of a line as the choice needs it: its two regimes and whether it belongs to a treated fine-structure term. */
+export interface LineSide {
+  hf: Regime;
+  fs: Regime;
+  inTerm: boolean;
+}
+
+export interface LineFacts {
+  /** Upper and lower level have the same total spin S. */
+  sameSpin: boolean;
+  multipole: "E1" | "M1" | "E2";
+  /** Both levels have hyperfine structure (nuclear spin and hyperfine constants). */
+  hyperfineBoth: boolean;
+}
+
+/**
+ * Regime of a line at a field and the model its components come from (see
+ * the module comment). Worked example: 87Rb D2 at 1 G (both levels with
+ * hyperfine structure, fine structure linear) → regime "linear Zeeman",
+ * model "hyperfine–Zeeman eigenstates"; Ca⁺ 397 nm without nuclear spin at a
+ * field past its 4p term's 1 % limit → "fine-structure Paschen–Back eigenstates".
+ */
+export function chooseLineModel(upper: LineSide, lower: LineSide, line: LineFacts): { regime: Regime; model: LineModel } {
+  const beyondLinear = (r: Regime) => r === "intermediate" || r === "Paschen–Back";
+  const regime = strongerRegime(strongerRegime(upper.hf, lower.hf), strongerRegime(upper.fs, lower.fs));
+  const fsMatters = beyondLinear(upper.fs) || beyondLinear(lower.fs);
+  if (fsMatters && (upper.inTerm || lower.inTerm) && line.sameSpin && line.multipole !== "M1") {
+    return { regime, model: "fine-structure Paschen–Back eigenstates" };
+  }
+  if (line.hyperfineBoth) return { regime, model: "hyperfine–Zeeman eigenstates" };
+  return { regime, model: "J-resolved linear pattern" };
+}
