@@ -14,6 +14,7 @@ import { mkdirSync, writeFileSync, appendFileSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
 import { loadDataFolder } from "../data/loadDataFolder.js";
 import { editionByName } from "../physics/constants/editions.js";
+import { tableCsv } from "../site/csv.js";
 import { publicBase } from "../site/publicBase.js";
 import { mergeSearchData, searchIndexScript } from "../site/searchIndex.js";
 import { sheetAddress } from "../site/sheet.js";
@@ -99,6 +100,7 @@ export async function buildSite(opts: BuildOptions): Promise<{ species: number }
     species: summaries.map(({ id, label, url, exportUrl, summary, sheet }) => ({ id, label, url, exportUrl, summary, sheet })),
     sheets: { ...frame.sheets, all: summaries.map((s) => s.sheet), allAddress: sheetAddress(siteUrl, "sheet/") },
   };
+  write(summary.constantsTable.csvPath, tableCsv(summary.constantsTable));
   await timedAsync("site", () => renderSitePages(staging, summary));
   timed("bundle", () => bundleBrowser(staging));
 

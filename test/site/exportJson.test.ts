@@ -1,8 +1,7 @@
 import { mkdirSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
-import { loadAtlas } from "../../src/site/loadAtlas.js";
-import type { Atlas } from "../../src/site/atlas.js";
+import { exportsOf } from "../support/exports.js";
 import { tempDir } from "../support/runBuild.js";
 
 // A small folder that exercises every rule of the export contract (README,
@@ -46,8 +45,8 @@ lines:
 `,
 };
 
-let atlas: Atlas;
-const exportOf = (id: string) => JSON.parse(atlas.species.find((s) => s.id === id)!.exportJson);
+let exports: Map<string, string>;
+const exportOf = (id: string) => JSON.parse(exports.get(id)!);
 
 beforeAll(() => {
   const dir = tempDir("atlas-export-");
@@ -55,7 +54,7 @@ beforeAll(() => {
     mkdirSync(join(dir, rel, ".."), { recursive: true });
     writeFileSync(join(dir, rel), text);
   }
-  atlas = loadAtlas({ dataDir: dir, buildDate: "2027-01-01T00:00:00.000Z" });
+  exports = exportsOf(dir);
 });
 
 describe("the species export", () => {

@@ -1,7 +1,7 @@
 import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
-import { htmlFiles } from "../../src/cli/anchors.js";
+import { htmlFiles } from "../../src/build/anchors.js";
 import { demoSite } from "../support/runBuild.js";
 
 let site: string;

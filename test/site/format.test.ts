@@ -3,7 +3,7 @@ import { dec } from "../../src/physics/decimal.js";
 import { Rational } from "../../src/physics/rational.js";
 import { FIGURE_SPACE, THIN_SPACE, groupDigits, numberParts, partsText, writtenDigits, writtenParts } from "../../src/site/format.js";
 import { PUNCTUATION_SPACE, alignTable, fractionCell, measuredCell, numberCell, type Cell, type Table } from "../../src/site/table.js";
-import { buildDateFrom } from "../../src/site/loadAtlas.js";
+import { buildDateFrom } from "../../src/build/build.js";
 
 const T = THIN_SPACE;
 

@@ -7,7 +7,7 @@ import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { HtmlValidate, FileSystemConfigLoader } from "html-validate";
 import { beforeAll, describe, expect, it } from "vitest";
-import { htmlFiles } from "../../src/cli/anchors.js";
+import { htmlFiles } from "../../src/build/anchors.js";
 import { ROOT, demoSite } from "../support/runBuild.js";
 
 let site: string;

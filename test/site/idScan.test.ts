@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { ANCHORS_FORMAT, anchorsManifest, decodeAttribute, lostAnchors, manifestText, pageIds, parseManifest, scanIds, startTags } from "../../src/site/idScan.js";
+import { decodeAttribute, pageIds, scanIds, startTags } from "../../src/site/idScan.js";
 
 describe("scanIds", () => {
   it("finds ids in double, single and unquoted attributes, in any case", () => {
@@ -42,38 +42,5 @@ describe("scanIds", () => {
 
   it("sorts by code point, independent of locale", () => {
     expect(scanIds(`<p id="b"></p><p id="B"></p><p id="a"></p><p id="Ä"></p>`)).toEqual(["B", "a", "b", "Ä"]);
-  });
-});
-
-describe("anchors manifest", () => {
-  it("sorts pages and writes the format tag", () => {
-    const m = anchorsManifest([
-      ["species/rb87/index.html", `<tr id="line:D2"></tr><tr id="line:D1"></tr>`],
-      ["index.html", `<main id="main">`],
-    ]);
-    expect(Object.keys(m.pages)).toEqual(["index.html", "species/rb87/index.html"]);
-    expect(m.pages["species/rb87/index.html"]).toEqual(["line:D1", "line:D2"]);
-    expect(manifestText(m)).toBe(JSON.stringify({ format: ANCHORS_FORMAT, pages: m.pages }, null, 2) + "\n");
-  });
-
-  it("reports anchors that vanished, and marks the ones whose page vanished", () => {
-    const before = anchorsManifest([
-      ["a.html", `<p id="x"></p><p id="y"></p>`],
-      ["b.html", `<p id="z"></p>`],
-    ]);
-    const after = anchorsManifest([["a.html", `<p id="y"></p><p id="new"></p>`]]);
-    expect(lostAnchors(before, after)).toEqual([
-      { page: "a.html", anchor: "x", pageGone: false },
-      { page: "b.html", anchor: "z", pageGone: true },
-    ]);
-    expect(lostAnchors(after, after)).toEqual([]);
-  });
-
-  it("refuses a file that is not an anchors manifest", () => {
-    expect(parseManifest({ format: "other", pages: {} })).toMatch(/format/);
-    expect(parseManifest({ format: ANCHORS_FORMAT, pages: { "a.html": [1] } })).toMatch(/a\.html/);
-    expect(parseManifest({ format: ANCHORS_FORMAT, pages: [] })).toMatch(/pages/);
-    expect(parseManifest(null)).toMatch(/object/);
-    expect(typeof parseManifest({ format: ANCHORS_FORMAT, pages: { "a.html": ["x"] } })).toBe("object");
   });
 });

@@ -56,17 +56,23 @@ describe("search data of the demo site", () => {
   const first = (q: string) => finder.search(q, 10).rows[0];
 
   it("reaches every level, sublevel, hyperfine, line and component row of every species page, and nothing else", () => {
+    // The overview of each species and its line pages (the J-resolved components live there).
     const speciesDir = join(site, "species");
     const onPages = new Set<string>();
-    for (const id of readdirSync(speciesDir)) {
-      const page = join(speciesDir, id, "index.html");
-      if (!existsSync(page)) continue;
-      const html = readFileSync(page, "utf8");
-      onPages.add(`species/${id}/index.html`);
+    const scan = (path: string, rows: RegExp) => {
+      const html = readFileSync(join(site, path), "utf8");
       for (const m of html.matchAll(/<tr id="([^"]+)"/g)) {
         const rowId = m[1]!.replace(/&amp;/g, "&");
-        if (INDEXED_ROW.test(rowId)) onPages.add(`species/${id}/index.html#${rowId}`);
+        if (INDEXED_ROW.test(rowId) && rows.test(rowId)) onPages.add(`${path}#${rowId}`);
       }
+    };
+    for (const id of readdirSync(speciesDir)) {
+      const page = `species/${id}/index.html`;
+      if (!existsSync(join(site, page))) continue;
+      onPages.add(page);
+      scan(page, /^(level:|line:[^:]+$)/);
+      const lineDir = join(speciesDir, id, "line");
+      if (existsSync(lineDir)) for (const line of readdirSync(lineDir)) scan(`species/${id}/line/${line}/index.html`, /^line:[^:]+:mu=/);
     }
     const targets = finder.all().map((r) => r.href);
     expect(new Set(targets).size).toBe(targets.length);
@@ -104,7 +110,7 @@ describe("search data of the demo site", () => {
     expect(both.length).toBeGreaterThan(0);
     for (const r of both) expect(r.href).toMatch(/:F=2:mF=1$/);
     expect(first("rb87 5s-S1/2 F=2 mF=-2")!.href).toBe("species/rb87/index.html#level:5s-S1/2:F=2:mF=-2");
-    expect(first("rb87 D2 mu=3/2 ml=1/2")!.href).toBe("species/rb87/index.html#line:D2:mu=3/2,ml=1/2");
+    expect(first("rb87 D2 mu=3/2 ml=1/2")!.href).toBe("species/rb87/line/D2/index.html#line:D2:mu=3/2,ml=1/2");
   });
 
   it("finds nothing for an empty query and says so for a query without matches", () => {

@@ -7,7 +7,7 @@
 import { existsSync, readFileSync, statSync } from "node:fs";
 import { dirname, join, normalize, relative } from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
-import { htmlFiles } from "../../src/cli/anchors.js";
+import { htmlFiles } from "../../src/build/anchors.js";
 import { scanIds, startTags } from "../../src/site/idScan.js";
 import { demoSite } from "../support/runBuild.js";
 

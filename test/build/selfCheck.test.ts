@@ -5,14 +5,14 @@
 import { cpSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { selfCheck } from "../../src/cli/selfCheck.js";
-import type { Atlas } from "../../src/site/atlas.js";
+import { selfCheck } from "../../src/build/selfCheck.js";
+import type { SiteSummary } from "../../src/site/siteSummary.js";
 import { runBuild, tempDir } from "../support/runBuild.js";
-import { smallDataFolder } from "./smallData.js";
+import { smallDataFolder } from "../cli/smallData.js";
 
 const parent = tempDir("atlas-selfcheck-");
 const built = join(parent, "_site");
-const atlas = { species: [{ exportUrl: "export/sr88.json" }] } as unknown as Pick<Atlas, "species">;
+const atlas = { species: [{ exportUrl: "export/sr88.json" }] } as unknown as Pick<SiteSummary, "species">;
 let n = 0;
 
 /** A copy of the built site with `edit` applied. */

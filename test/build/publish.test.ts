@@ -1,7 +1,7 @@
 import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { basename, dirname, join } from "node:path";
 import { afterEach, describe, expect, it } from "vitest";
-import { makeStagingDir, publish, recoverInterrupted } from "../../src/cli/publish.js";
+import { makeStagingDir, publish, recoverInterrupted } from "../../src/build/publish.js";
 import { tempDir } from "../support/runBuild.js";
 
 let parent = "";
