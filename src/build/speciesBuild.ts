@@ -21,6 +21,7 @@ import { levelViews, lineViews, overviewView, type PageView, type SpeciesViewsIn
 import { hasPagesBelow, movedMap, movedScript, MOVED_FILE, type PageIds } from "./forwarding.js";
 import type { RenderPage } from "./renderPages.js";
 import { timed } from "./timings.js";
+import { CALCULATOR_PARTIAL, writeEngineData } from "./writeEngineData.js";
 
 /**
  * A line or level page above this size is split: a line gets one page per
@@ -79,13 +80,14 @@ function tablesOf(view: PageView): Table[] {
 export function buildSpecies(input: SpeciesInput, ctx: SpeciesBuildContext): SpeciesSummary {
   const result = timed("physics", () => computeSpecies(input, ctx.constants));
   const fields = timed("physics", () => computeFields(result, ctx.constants, ctx.configured));
+  timed("engine", () => writeEngineData(result, fields, ctx.constants, ctx.configured, ctx.write));
   const id = input.id;
   const v: SpeciesViewsInput = { result, fields, configured: ctx.configured, muB_h: val(ctx.constants.muB_h) };
   const atlas = ctx.frame;
   const csv = new Map<string, string>();
   const rendered: { view: PageView; html: string }[] = [];
   const render = (view: PageView, movedAnchors: string | null) =>
-    timed("render", () => ctx.render(`species/${view.kind}.njk`, `/${htmlFile(view.path)}`, { view, atlas, pageTitle: view.title, movedAnchors }));
+    timed("render", () => ctx.render(`species/${view.kind}.njk`, `/${htmlFile(view.path)}`, { view, atlas, pageTitle: view.title, movedAnchors, calculatorPartial: CALCULATOR_PARTIAL }));
 
   // Line pages first: one that is too large is rendered again with a page per field.
   const keep = (view: PageView, html: string) => {
