@@ -9,6 +9,9 @@
  */
 import { expect } from "vitest";
 import type { AtResult } from "../../src/engine/types.js";
+import type { ExactAnswer } from "./exportAt.js";
+
+export type { ExactAnswer };
 
 export const REL = 1e-9;
 export const HZ = 1;
@@ -22,13 +25,6 @@ export function close(a: number, b: number, abs: number): boolean {
 function expectClose(a: number, exact: string, abs: number, what: string): void {
   const b = Number(exact);
   if (!close(a, b, abs)) expect.fail(`${what}: calculator ${a}, exact ${exact} (difference ${a - b})`);
-}
-
-/** The exact answer in the shape shared by both (lines as the export's at_fields entries). */
-export interface ExactAnswer {
-  levels: AtResult<string>["levels"];
-  transitions: AtResult<string>["transitions"];
-  lines: AtResult<string>["lines"];
 }
 
 /** Assert that the calculator's answer matches the exact one within the tolerance; returns the number of values compared. */

@@ -8,40 +8,11 @@
 import { describe, expect, it } from "vitest";
 import { engineAt } from "../../src/engine/engine.js";
 import { speciesExport } from "../../src/site/exportJson.js";
-import type { AtResult } from "../../src/engine/types.js";
+import { exportAt } from "./exportAt.js";
 import { demoSpecies } from "./demo.js";
 import { expectAgrees } from "./compare.js";
 
 const { species, configured, constants, folder } = demoSpecies();
-
-type Exact = Omit<AtResult<string>, "B_T">;
-
-/** The field-dependent keys of one level and one line of the export (see README, "The JSON export"). */
-interface ExportLevel {
-  id: string;
-  field_table: { states: Exact["levels"][number]["states"] }[];
-  sublevel_transitions: { lower: { F: string; mF: string }; upper: { F: string; mF: string }; kind: "magnetic-dipole" | "two-photon"; at_fields: { Hz: string }[] }[];
-}
-interface ExportLine {
-  id: string;
-  at_fields: Omit<Exact["lines"][number], "id">[];
-}
-
-/** The export's entries at configured field i, gathered into the calculator's shape. */
-function exportAt(exp: ReturnType<typeof speciesExport>, i: number): Exact {
-  const levels = exp.levels as unknown as ExportLevel[];
-  const lines = exp.lines as unknown as ExportLine[];
-  return {
-    levels: levels.map((l) => ({ id: l.id, states: l.field_table[i]!.states })),
-    transitions: levels.flatMap((l) =>
-      l.sublevel_transitions.map((t) => ({ level: l.id, lower: t.lower, upper: t.upper, kind: t.kind, Hz: t.at_fields[i]!.Hz })),
-    ),
-    lines: lines.map((ln) => {
-      const a = ln.at_fields[i]!;
-      return { id: ln.id, model: a.model, regime: a.regime, components: a.components };
-    }),
-  };
-}
 
 describe("field calculator at the configured fields of the demo data", () => {
   for (const sp of species) {
