@@ -9,6 +9,7 @@ import { join } from "node:path";
 import { checkExportSchema } from "../checks/exportSchema.js";
 import { checkFiniteNumbers } from "../checks/finiteNumbers.js";
 import { checkLineReferences } from "../checks/lineReferences.js";
+import { checkPageBudget } from "../checks/pageBudget.js";
 import { checkStrengthSums } from "../checks/strengthSums.js";
 import { checkUniqueAnchors } from "../checks/uniqueAnchors.js";
 import type { SiteSummary } from "../site/siteSummary.js";
@@ -43,6 +44,9 @@ export function selfCheck(staging: string, atlas: Pick<SiteSummary, "species">):
   }
   const pages = htmlFiles(staging).sort();
   if (pages.length === 0) problems.push("no HTML pages were written");
-  for (const page of pages) problems.push(...checkUniqueAnchors(readFileSync(join(staging, page), "utf8"), page));
+  for (const page of pages) {
+    const bytes = readFileSync(join(staging, page));
+    problems.push(...checkPageBudget(page, bytes.length), ...checkUniqueAnchors(bytes.toString("utf8"), page));
+  }
   return problems;
 }

@@ -13,11 +13,11 @@ import { val } from "../physics/constants/constant.js";
 import { Dec } from "../physics/decimal.js";
 import { hzPerTeslaToMHzPerGauss } from "../physics/zeeman.js";
 import { formatDoubled } from "../physics/quantum.js";
-import type { SublevelShift } from "../results/types.js";
-import type { SpeciesResult } from "../results/types.js";
+import type { HyperfineLevelResult, LevelResult, LineResult, SpeciesResult, SublevelShift } from "../results/types.js";
 import { formatM, formatNumber, formatQuantum, partsText, writtenParts } from "./format.js";
 import { levelAnchor, lineAnchor } from "./anchors.js";
-import { alignTable, fractionCell, measuredCell, numberCell, type Cell, type Table, termCell, textCell } from "./table.js";
+import { fractionCell, measuredCell, numberCell, type Cell, type Table, termCell, textCell } from "./table.js";
+import { makeTable } from "./tableSpec.js";
 
 /** Significant digits of a per-unit-m shift on a sheet; list values get fewer. */
 export const SHEET_DIGITS = 6;
@@ -72,6 +72,12 @@ export interface SheetOptions {
   mList: boolean;
 }
 
+/** One row of a sheet's level table: a level (J) or one of its hyperfine levels (F). */
+interface SheetLevelRow {
+  level: LevelResult;
+  hf: HyperfineLevelResult | null;
+}
+
 export function speciesSheet(s: SpeciesResult, opts: SheetOptions): SpeciesSheet {
   let allOdd = true;
   const list = (subs: SublevelShift[]): Cell => {
@@ -79,77 +85,44 @@ export function speciesSheet(s: SpeciesResult, opts: SheetOptions): SpeciesSheet
     if (!l.oddInM) allOdd = false;
     return textCell(l.text);
   };
-  const rows: Table["rows"] = [];
-  for (const l of s.levels) {
-    const lid = l.input.id;
-    const g: Cell =
-      l.gJ === null ? textCell("—") : l.gJFrom === "measured" && l.input.gJ ? measuredCell(l.input.gJ, l.gJ) : numberCell(l.gJ, SHEET_DIGITS);
-    rows.push({
-      anchor: `sheet:${levelAnchor(lid)}`,
-      cells: [
-        textCell(lid),
-        termCell(l.input.term),
-        textCell(`J = ${formatQuantum(l.J2)}`),
-        g,
-        fractionCell(l.gJExact),
-        numberCell(shiftPerM(l.sublevels), SHEET_DIGITS),
-        ...(opts.mList ? [list(l.sublevels)] : []),
+  const levelRows: SheetLevelRow[] = s.levels.flatMap((level) => [{ level, hf: null }, ...level.hyperfine.map((hf) => ({ level, hf }))]);
+  const gCell = (l: LevelResult): Cell =>
+    l.gJ === null ? textCell("—") : l.gJFrom === "measured" && l.input.gJ ? measuredCell(l.input.gJ, l.gJ) : numberCell(l.gJ, SHEET_DIGITS);
+  const sublevels = makeTable<SheetLevelRow>(
+    {
+      id: `sheet-levels:${s.input.id}`,
+      caption: "Levels and sublevels",
+      csvPath: "",
+      anchor: ({ level, hf }) => `sheet:${levelAnchor(level.input.id)}${hf ? `:F=${formatDoubled(hf.F2)}` : ""}`,
+      columns: [
+        { key: "level", label: "level", kind: "text", cell: ({ level, hf }) => (hf ? blank() : textCell(level.input.id)) },
+        { key: "term", label: "term", kind: "term", cell: ({ level, hf }) => (hf ? blank() : termCell(level.input.term)) },
+        { key: "which", label: "J / F", kind: "text", cell: ({ level, hf }) => textCell(hf ? `F = ${formatQuantum(hf.F2)}` : `J = ${formatQuantum(level.J2)}`) },
+        { key: "g", label: "gJ / gF", kind: "number", cell: ({ level, hf }) => (hf ? numberCell(hf.gF, SHEET_DIGITS) : gCell(level)) },
+        { key: "gLS", label: "gJ, LS exact", kind: "fraction", cell: ({ level, hf }) => (hf ? blank() : fractionCell(level.gJExact)) },
+        { key: "perM", label: "per unit m", unit: "MHz/G", kind: "number", cell: ({ level, hf }) => numberCell(shiftPerM(hf ? hf.sublevels : level.sublevels), SHEET_DIGITS) },
+        { key: "list", label: "shift at m > 0", unit: "MHz/G", kind: "text", when: opts.mList, cell: ({ level, hf }) => list(hf ? hf.sublevels : level.sublevels) },
       ],
-    });
-    for (const h of l.hyperfine) {
-      rows.push({
-        anchor: `sheet:${levelAnchor(lid)}:F=${formatDoubled(h.F2)}`,
-        cells: [
-          blank(),
-          blank(),
-          textCell(`F = ${formatQuantum(h.F2)}`),
-          numberCell(h.gF, SHEET_DIGITS),
-          blank(),
-          numberCell(shiftPerM(h.sublevels), SHEET_DIGITS),
-          ...(opts.mList ? [list(h.sublevels)] : []),
-        ],
-      });
-    }
-  }
-  const sublevels: Table = alignTable({
-    id: `sheet-levels:${s.input.id}`,
-    caption: "Levels and sublevels",
-    csvPath: "",
-    columns: [
-      { key: "level", label: "level", kind: "text" },
-      { key: "term", label: "term", kind: "term" },
-      { key: "which", label: "J / F", kind: "text" },
-      { key: "g", label: "gJ / gF", kind: "number" },
-      { key: "gLS", label: "gJ, LS exact", kind: "fraction" },
-      { key: "perM", label: "per unit m", unit: "MHz/G", kind: "number" },
-      ...(opts.mList ? [{ key: "list", label: "shift at m > 0", unit: "MHz/G", kind: "text" as const }] : []),
-    ],
-    rows,
-  });
-  const lines: Table = alignTable({
-    id: `sheet-lines:${s.input.id}`,
-    caption: "Lines",
-    csvPath: "",
-    columns: [
-      { key: "line", label: "line", kind: "text" },
-      ...(opts.mList ? [{ key: "transition", label: "upper → lower", kind: "text" as const }] : []),
-      { key: "wavelength", label: "λ", unit: "nm", kind: "number" },
-      { key: "g_eff", label: "g_eff", kind: "number" },
-      { key: "pattern", label: "pattern", kind: "text" },
-      ...(opts.mList ? [{ key: "reading", label: "reading", kind: "text" as const }] : []),
-    ],
-    rows: s.lines.map((ln) => ({
-      anchor: `sheet:${lineAnchor(ln.input.id)}`,
-      cells: [
-        textCell(ln.input.id),
-        ...(opts.mList ? [textCell(`${ln.upper.input.id} → ${ln.lower.input.id}`)] : []),
-        ln.input.wavelength ? wavelengthCell(ln.input.wavelength) : numberCell(null),
-        numberCell(ln.gEff, SHEET_DIGITS),
-        textCell(ln.pattern ?? "—"),
-        ...(opts.mList ? [textCell(ln.summary)] : []),
+    },
+    levelRows,
+  );
+  const lines = makeTable<LineResult>(
+    {
+      id: `sheet-lines:${s.input.id}`,
+      caption: "Lines",
+      csvPath: "",
+      anchor: (ln) => `sheet:${lineAnchor(ln.input.id)}`,
+      columns: [
+        { key: "line", label: "line", kind: "text", cell: (ln) => textCell(ln.input.id) },
+        { key: "transition", label: "upper → lower", kind: "text", when: opts.mList, cell: (ln) => textCell(`${ln.upper.input.id} → ${ln.lower.input.id}`) },
+        { key: "wavelength", label: "λ", unit: "nm", kind: "number", cell: (ln) => (ln.input.wavelength ? wavelengthCell(ln.input.wavelength) : numberCell(null)) },
+        { key: "g_eff", label: "g_eff", kind: "number", cell: (ln) => numberCell(ln.gEff, SHEET_DIGITS) },
+        { key: "pattern", label: "pattern", kind: "text", cell: (ln) => textCell(ln.pattern ?? "—") },
+        { key: "reading", label: "reading", kind: "text", when: opts.mList, cell: (ln) => textCell(ln.summary) },
       ],
-    })),
-  });
+    },
+    s.lines,
+  );
   const nucleus = s.input.nucleus;
   return {
     id: s.input.id,
