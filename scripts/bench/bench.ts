@@ -26,7 +26,7 @@ import { tmpdir } from "node:os";
 import { dirname, join, relative, resolve, sep } from "node:path";
 import { performance } from "node:perf_hooks";
 import { fileURLToPath } from "node:url";
-import { parseTimings } from "../../src/cli/timings.js";
+import { parseTimings } from "../../src/build/timings.js";
 import { writeSyntheticData, type SyntheticSize } from "./syntheticData.js";
 
 const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), "../..");
