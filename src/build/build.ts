@@ -12,20 +12,21 @@
  */
 import { mkdirSync, writeFileSync, appendFileSync } from "node:fs";
 import { dirname, join, resolve } from "node:path";
-import { loadDataFolder } from "../data/loadDataFolder.js";
 import { editionByName } from "../physics/constants/editions.js";
 import { tableCsv } from "../site/csv.js";
 import { publicBase } from "../site/publicBase.js";
 import { mergeSearchData, searchIndexScript } from "../site/searchIndex.js";
 import { sheetAddress } from "../site/sheet.js";
 import { constantsTable, siteFrameParts, type SiteSummary } from "../site/siteSummary.js";
+import { buildAllSpecies } from "./allSpecies.js";
 import { writeAnchors } from "./anchors.js";
 import { bundleBrowser } from "./bundleBrowser.js";
+import { cacheRoot, codeVersion, packDir, pruneCache } from "./cache.js";
+import { loadWithSnapshot } from "./dataSnapshot.js";
 import { ROOT } from "./paths.js";
 import { makeStagingDir, publish, recoverInterrupted } from "./publish.js";
-import { pageRenderer } from "./renderPages.js";
 import { selfCheck } from "./selfCheck.js";
-import { buildSpecies, type SiteFrame, type SpeciesSummary } from "./speciesBuild.js";
+import type { SiteFrame } from "./speciesBuild.js";
 import { timed, timedAsync } from "./timings.js";
 
 export interface BuildOptions {
@@ -37,6 +38,17 @@ export interface BuildOptions {
   fault?: string;
   /** Told the staging folder as soon as it exists (for clean-up on a signal). */
   onStaging?: (dir: string | null) => void;
+  /** The cache folder (ATLAS_CACHE): a path, "off", or unset for `.atlas-cache/` beside the output (see cache.ts). */
+  cache?: string;
+  /** Threads for the species at most (ATLAS_WORKERS); default: the machine's available parallelism. */
+  workers?: number;
+}
+
+export interface BuildResult {
+  species: number;
+  /** Species computed by this build, and species restored from the cache. */
+  computed: number;
+  reused: number;
 }
 
 /** Thrown when the self-checks refuse the staged site. */
@@ -53,12 +65,16 @@ export function buildDateFrom(env: NodeJS.ProcessEnv, now: () => Date = () => ne
   return now().toISOString();
 }
 
-export async function buildSite(opts: BuildOptions): Promise<{ species: number }> {
+export async function buildSite(opts: BuildOptions): Promise<BuildResult> {
+  const started = Date.now();
   const out = resolve(opts.out);
   recoverInterrupted(out);
+  const cache = cacheRoot(out, opts.cache);
+  const packs = cache ? packDir(cache) : null;
+  if (packs) pruneCache(packs, {});
 
   // --- load: throws InputProblems before anything is written ---
-  const folder = timed("load", () => loadDataFolder(opts.dataDir));
+  const { folder, snapshot } = timed("load", () => loadWithSnapshot(opts.dataDir));
   const constants = editionByName(folder.site.constants)!; // the data layer checked the name
   const fields = folder.site.fields.map((f) => ({ text: f.text, tesla: f.tesla.toString() }));
   const siteUrl = publicBase(folder.site.siteUrl, folder.site.pathPrefix);
@@ -79,12 +95,15 @@ export async function buildSite(opts: BuildOptions): Promise<{ species: number }
     writeFileSync(file, text);
   };
 
-  // --- species, one at a time ---
-  const render = pageRenderer();
-  const summaries: SpeciesSummary[] = [];
-  for (const input of [...folder.species].sort((a, b) => a.id.localeCompare(b.id, "en"))) {
-    summaries.push(buildSpecies(input, { constants, configured: folder.site.fields, siteUrl, frame, render, write }));
-  }
+  // --- species: restored from the cache, or computed in worker threads (allSpecies.ts); sorted by id ---
+  const species = await timedAsync("species", () =>
+    buildAllSpecies(folder, snapshot, {
+      setup: { staging, packs, constants: constants.edition, fields, siteUrl, frame },
+      settings: { code: packs ? codeVersion() : "", title: folder.site.title, lab: folder.site.lab, siteUrl: folder.site.siteUrl, pathPrefix: folder.site.pathPrefix, constants: constants.edition, fields },
+      workers: opts.workers,
+    }),
+  );
+  const summaries = species.summaries;
 
   // --- site-wide pages, from the summary ---
   write("assets/search-index.js", timed("search", () => searchIndexScript(mergeSearchData(summaries.map((s) => s.search)))));
@@ -117,7 +136,8 @@ export async function buildSite(opts: BuildOptions): Promise<{ species: number }
   if (problems.length > 0) throw new SelfCheckFailed(problems);
   timed("publish", () => publish(staging, out));
   opts.onStaging?.(null);
-  return { species: summaries.length };
+  if (packs) pruneCache(packs, { keep: species.keys, since: started });
+  return { species: summaries.length, computed: species.computed, reused: species.reused };
 }
 
 /** Eleventy renders templates/*.njk (index, constants, methods, all-species sheet) and copies the assets. */

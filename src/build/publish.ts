@@ -21,7 +21,7 @@ export function makeStagingDir(out: string, pid: number = process.pid): string {
 }
 
 /** True when a process with this id exists (signal 0 only checks). */
-function alive(pid: number): boolean {
+export function alive(pid: number): boolean {
   try {
     process.kill(pid, 0);
     return true;

@@ -45,3 +45,8 @@ export function parseTimings(text: string): Map<string, number> {
   for (const m of text.matchAll(/^timing (\S+) (\d+(?:\.\d+)?)$/gm)) out.set(m[1]!, Number(m[2]));
   return out;
 }
+
+/** Add time measured elsewhere (a worker thread's phases) to `phase`. */
+export function addTiming(phase: string, ms: number): void {
+  totals.set(phase, (totals.get(phase) ?? 0) + ms);
+}

@@ -5,7 +5,10 @@
  * Environment: ATLAS_DATA (data folder, default "data"), ATLAS_OUT (output
  * folder, default "_site"), SOURCE_DATE_EPOCH (build date, for reproducible
  * builds), ATLAS_TIMINGS=1 (print `timing <phase> <ms>` lines to stderr),
- * ATLAS_DEBUG=1 (print the stack of an unexpected failure).
+ * ATLAS_DEBUG=1 (print the stack of an unexpected failure), ATLAS_CACHE
+ * (cache folder, default .atlas-cache/ beside the output; "off" for none;
+ * see src/build/cache.ts), ATLAS_WORKERS (threads for the species at most,
+ * default the available parallelism; 1 builds in this thread).
  * Test only: ATLAS_FAULT=render (fail after rendering), selfcheck (corrupt
  * the staged site so the self-checks fail), stall (stop before the
  * self-checks and wait to be signalled; prints "stalled" to stderr), busy
@@ -51,7 +54,8 @@ async function main(): Promise<void> {
   };
   let built;
   try {
-    built = await buildSite({ dataDir, out, buildDate: buildDateFrom(process.env), fault: process.env.ATLAS_FAULT ?? "", onStaging });
+    const workers = /^\d+$/.test(process.env.ATLAS_WORKERS ?? "") ? Math.max(1, Number(process.env.ATLAS_WORKERS)) : undefined;
+    built = await buildSite({ dataDir, out, buildDate: buildDateFrom(process.env), fault: process.env.ATLAS_FAULT ?? "", onStaging, cache: process.env.ATLAS_CACHE || undefined, workers });
   } catch (e) {
     cleanUp();
     if (e instanceof InputProblems) throw new BuildStop(`${e.format()}\n${e.problems.length} problem(s) in ${dataDir}; nothing was published.`);
@@ -59,7 +63,7 @@ async function main(): Promise<void> {
     throw new BuildStop(`build failed; ${out} left as it was:\n  ${e instanceof Error ? e.message : String(e)}`, { cause: e });
   }
   if (process.env.ATLAS_TIMINGS === "1") process.stderr.write(formatTimings() + "\n");
-  process.stdout.write(`built ${built.species} species into ${out}\n`);
+  process.stdout.write(`built ${built.species} species into ${out}${built.reused > 0 ? ` (${built.reused} from the cache)` : ""}\n`);
 }
 
 try {
