@@ -17,11 +17,10 @@
  * with textContent only (no HTML from data), in tables laid out like the
  * build's. No inline script or style is used (the pages' CSP forbids both).
  */
-import { Dec } from "../physics/decimal.js";
 import { engineAt, prepareEngine } from "../engine/engine.js";
 import { parseFieldText } from "../engine/fieldText.js";
 import { ENGINE_FORMAT, type AtResult, type EngineData } from "../engine/types.js";
-import { formatNumber } from "../site/format.js";
+import { formatFloat } from "./formatFloat.js";
 
 declare global {
   interface Window {
@@ -77,7 +76,7 @@ window.SublevelAtlas = api;
 const UNIT_ALIASES: Record<string, string> = { uT: "µT", "μT": "µT" };
 const MHZ = 1e6;
 
-const show = (x: number, sig: number): string => formatNumber(new Dec(String(x)), sig);
+const show = (x: number, sig: number): string => formatFloat(x, sig);
 const signed = (q: string) => q.replace(/^-/, "\u2212");
 
 function el<K extends keyof HTMLElementTagNameMap>(tag: K, text?: string, cls?: string): HTMLElementTagNameMap[K] {
