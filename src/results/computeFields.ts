@@ -53,16 +53,28 @@ export interface SpeciesFieldResult {
   lines: Map<string, LineFieldResult>;
 }
 
+/**
+ * Hyperfine constants of a level in a species with nuclear spin, or null
+ * without one. A level that lists none (every J = 0 level, or constants
+ * not measured) has A = B = 0: its nuclear sublevels and their Zeeman
+ * shifts are still there.
+ */
+export function hyperfineConstants(s: SpeciesResult, l: LevelResult): { A: Dec; B: Dec } | null {
+  if (s.I2 === 0) return null;
+  const hf = l.input.hyperfine;
+  return { A: hf ? hf.A.si : ZERO, B: hf?.B ? hf.B.si : ZERO };
+}
+
 /** The solver's view of a level; gJ = 0 stands in for J = 0 (no magnetic moment). */
 export function solverLevel(s: SpeciesResult, l: LevelResult, c: ConstantsEdition): HyperfineZeemanLevel {
-  const hasHf = s.I2 > 0 && l.input.hyperfine !== null;
+  const hf = hyperfineConstants(s, l);
   return {
     J2: l.J2,
-    I2: hasHf ? s.I2 : 0,
+    I2: hf ? s.I2 : 0,
     gJ: l.gJ ?? ZERO,
     gI: s.gI ?? ZERO,
-    A: hasHf ? l.input.hyperfine!.A.si : ZERO,
-    B: hasHf && l.input.hyperfine!.B ? l.input.hyperfine!.B.si : ZERO,
+    A: hf ? hf.A : ZERO,
+    B: hf ? hf.B : ZERO,
     muB_h: val(c.muB_h),
   };
 }
@@ -230,7 +242,9 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
   const lineResult = (ln: LineResult): LineFieldResult => {
     const u = ln.upper;
     const l = ln.lower;
-    const hfBoth = s.I2 > 0 && u.input.hyperfine !== null && l.input.hyperfine !== null;
+    const hfu = hyperfineConstants(s, u);
+    const hfl = hyperfineConstants(s, l);
+    const hfBoth = hfu !== null && hfl !== null;
     const atFields = fields.map((f, at): LineAtFieldResult => {
       const ru = regimeOf(u, f.tesla);
       const rl = regimeOf(l, f.tesla);
@@ -283,8 +297,8 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
       ? hyperfineLinePattern({
           I2: s.I2,
           gI: s.gI!,
-          upper: { J2: u.J2, gJ: u.gJ ?? ZERO, A: u.input.hyperfine!.A.si, B: u.input.hyperfine!.B?.si ?? ZERO },
-          lower: { J2: l.J2, gJ: l.gJ ?? ZERO, A: l.input.hyperfine!.A.si, B: l.input.hyperfine!.B?.si ?? ZERO },
+          upper: { J2: u.J2, gJ: u.gJ ?? ZERO, ...hfu! },
+          lower: { J2: l.J2, gJ: l.gJ ?? ZERO, ...hfl! },
           k: ln.k,
           muB_h,
         })

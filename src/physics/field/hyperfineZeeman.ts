@@ -37,7 +37,11 @@
  *    the constant term, then by mJ), and the k-th lowest eigenvalue is
  *    matched to the k-th of them.
  * A level without nuclear spin (I2 = 0) needs no special case: every block
- * is one state, F = J, mF = mJ and E = (μB/h)·gJ·mJ·B.
+ * is one state, F = J, mF = mJ and E = (μB/h)·gJ·mJ·B. Nor does a level
+ * with nuclear spin and A = B = 0 (no hyperfine constants listed): for
+ * J = 0 it has the single F = I, E = (μB/h)·gI·mI·B; for J > 0 its F levels
+ * coincide at B = 0, every field eigenstate is an uncoupled |mJ mI⟩, and the
+ * F labels follow the tie rule above (ascending F within each M block).
  *
  * Worked example: 87Rb 5²S1/2 (I = 3/2, gJ = 2.00233113, gI = −0.0009951414,
  * A = 3417.341305452145 MHz, μB/h = 13996244917.1 Hz/T) at B = 0 gives

@@ -23,13 +23,17 @@
  * The returned field is the float bisection result rounded to 7 significant
  * digits (a sample field is returned as given); trust about 6. The tolerances
  * are used as float64 numbers. `null` means "beyond range": never broken up
- * to maxTesla. paschenBackTesla is exact-decimal.
+ * to maxTesla. paschenBackTesla is exact-decimal. A level whose F levels
+ * are degenerate at zero field (A = B = 0, as for a level of a species with
+ * nuclear spin that lists no hyperfine constants) is mixed at first order
+ * by any field, so gF·mF fails from the start: its limits are 0 T as soon
+ * as the first sample breaks the criterion.
  *
  * Paschen–Back field: B_PB = ΔE_max / ((μB/h)·|gJ|), with ΔE_max the largest
  * zero-field splitting between F levels adjacent in energy. For J = 1/2 this
  * is A(I + 1/2)/((μB/h)·gJ), the field at which the electron's Zeeman energy
  * per unit mJ equals the hyperfine splitting. null without at least two F
- * levels or with gJ = 0.
+ * levels, with gJ = 0, or when all F levels coincide (A = B = 0).
  * Reference: A. Corney, "Atomic and Laser Spectroscopy" (Oxford, 1977), ch. 16.
  *
  * Worked example: 87Rb 5²S1/2 (A = 3417.341305452145 MHz, gJ = 2.00233113,
@@ -73,7 +77,7 @@ export function paschenBackField(level: HyperfineZeemanLevel): Dec | null {
   e.sort((x, y) => x.cmp(y));
   let max = ZERO;
   for (let k = 1; k < e.length; k++) if (e[k]!.minus(e[k - 1]!).gt(max)) max = e[k]!.minus(e[k - 1]!);
-  return max.div(level.muB_h.mul(level.gJ.abs()));
+  return max.isZero() ? null : max.div(level.muB_h.mul(level.gJ.abs()));
 }
 
 const STEPS = ["1", "1.5", "2", "3", "5", "7"];
@@ -135,14 +139,22 @@ export function linearValidity(level: HyperfineZeemanLevel, options: ValidityOpt
     return [r, a];
   };
   const samples = validitySamples(maxTesla);
+  // F levels degenerate at zero field (A = B = 0 with J, I > 0): any field mixes them at first order,
+  // so gF·mF describes nothing beyond B = 0 unless it happens to match.
+  const degenerate = hasDegenerateF(level);
   const limit = (which: 0 | 1): ValidityLimit => {
     let lo = 0;
     for (const sample of samples) {
       const b = sample.toNumber();
       if (check(b)[which] >= 0) {
+        if (degenerate && lo === 0) {
+          const s = labels[check(b)[which]]!;
+          return { tesla: ZERO, sublevel: { F2: s.F2, mF2: s.mF2 } };
+        }
         let hi = b;
         while (hi - lo > hi * 1e-9) {
           const mid = (lo + hi) / 2;
+          if (!(mid > lo && mid < hi)) break;
           if (check(mid)[which] >= 0) hi = mid;
           else lo = mid;
         }
@@ -155,6 +167,13 @@ export function linearValidity(level: HyperfineZeemanLevel, options: ValidityOpt
     return { tesla: null, sublevel: null };
   };
   return { relative: limit(0), absolute: limit(1), maxTesla, paschenBackTesla: paschenBackField(level) };
+}
+
+/** True when two different F levels of the level share one zero-field energy exactly. */
+function hasDegenerateF(level: HyperfineZeemanLevel): boolean {
+  const B = level.I2 >= 2 && level.J2 >= 2 ? level.B : ZERO;
+  const e = fValues(level.I2, level.J2).map((F2) => hyperfineShift(level.A, B, level.I2, level.J2, F2));
+  return e.some((x, i) => e.some((y, j) => j > i && x.eq(y)));
 }
 
 /** Significant digits kept of a float64-bisected validity field (good to about 6). */

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { dec } from "../../../src/physics/decimal.js";
+import { dec, ZERO } from "../../../src/physics/decimal.js";
 import { linearValidity, paschenBackField } from "../../../src/physics/field/validity.js";
 import { solveHyperfineZeeman } from "../../../src/physics/field/hyperfineZeeman.js";
 import { gF } from "../../../src/physics/hyperfine.js";
@@ -19,6 +19,19 @@ describe("linearValidity", () => {
     // relative 1 %: set by a state with linear shift ≈ 0.7 MHz/G and quadratic ≈ 215 Hz/G² → ~32 G (order of magnitude check)
     expect(v.relative.tesla!.toNumber()).toBeGreaterThan(1e-3);
     expect(v.relative.tesla!.toNumber()).toBeLessThan(1e-2);
+  });
+
+  it("gives 0 T and no Paschen–Back scale for a level whose F levels coincide (A = B = 0; issue 10, defect 1)", () => {
+    // Without hyperfine coupling the field eigenstates are |mJ mI⟩ at every B > 0 (degenerate
+    // perturbation theory, common practice), so gF·mF of the zero-field F states holds at no field.
+    // Before the degenerate case was handled, this search did not end.
+    const v = linearValidity({ ...RB87_5S, J2: 3, gJ: dec("1.3341"), A: ZERO });
+    expect(v.relative.tesla!.isZero()).toBe(true);
+    expect(v.paschenBackTesla).toBeNull();
+    // a J = 0 level with nuclear spin and A = 0 has one F = I: exactly linear, never broken
+    const j0 = linearValidity({ ...RB87_5S, J2: 0, gJ: ZERO, A: ZERO });
+    expect(j0.relative.tesla).toBeNull();
+    expect(j0.absolute.tesla).toBeNull();
   });
 
   it("reports beyond range when the tolerance is never broken", () => {
