@@ -221,7 +221,7 @@ export function engineAt(data: EngineData, tesla: number): AtResult<number> {
     const { regime, model } = chooseLineModel(side(u), side(l), {
       sameSpin: u.data.S2 === l.data.S2,
       multipole: ln.data.multipole,
-      hyperfineBoth: u.data.I2 > 0 && l.data.I2 > 0,
+      hyperfineBoth: ln.data.hyperfineBoth,
     });
     if (model === "J-resolved linear pattern") {
       return {

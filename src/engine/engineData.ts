@@ -8,7 +8,7 @@
 import type { Dec } from "../physics/decimal.js";
 import type { ConstantsEdition } from "../physics/constants/constant.js";
 import { val } from "../physics/constants/constant.js";
-import { solverLevel, type SpeciesFieldResult } from "../results/computeFields.js";
+import { hyperfineConstants, solverLevel, type SpeciesFieldResult } from "../results/computeFields.js";
 import type { ConfiguredField } from "../results/fieldTypes.js";
 import type { SpeciesResult } from "../results/types.js";
 import { ENGINE_FORMAT, type EngineData } from "./types.js";
@@ -74,6 +74,7 @@ export function engineData(
       lower: ln.lower.input.id,
       multipole: ln.input.multipole,
       k: ln.k,
+      hyperfineBoth: hyperfineConstants(s, ln.upper) !== null && hyperfineConstants(s, ln.lower) !== null,
       linear: ln.components.map((x) => ({
         mu2: x.mu2,
         ml2: x.ml2,

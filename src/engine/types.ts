@@ -69,6 +69,8 @@ export interface EngineLine {
   multipole: "E1" | "M1" | "E2";
   /** Multipole rank k. */
   k: number;
+  /** Both levels have hyperfine structure in the build's sense (computeFields' hyperfineConstants). */
+  hyperfineBoth: boolean;
   linear: EngineLinearComponent[];
 }
 

@@ -30,6 +30,7 @@ import {
 import { hyperfineLinePattern } from "../physics/hyperfineLines.js";
 import { formatDoubled, mValues } from "../physics/quantum.js";
 import type { LevelResult, LineResult, SpeciesResult } from "./types.js";
+import { chooseLineModel, levelRegime, type LineSide } from "./lineModel.js";
 import type {
   ConfiguredField,
   LevelFieldResult,
@@ -167,19 +168,8 @@ function fineStructureTerms(s: SpeciesResult, c: ConstantsEdition, fields: Confi
   return out;
 }
 
-const RANK: Regime[] = ["zero field", "linear Zeeman", "intermediate", "Paschen–Back"];
-
-/** Regime of one level at one field, from the limits computed for it. */
-export function levelRegime(tesla: Dec, linearUpTo: Dec | null, paschenBack: Dec | null): Regime {
-  if (tesla.isZero()) return "zero field";
-  if (linearUpTo === null || tesla.lte(linearUpTo)) return "linear Zeeman";
-  if (paschenBack !== null && tesla.gte(paschenBack.mul(10))) return "Paschen–Back";
-  return "intermediate";
-}
-
-function stronger(a: Regime, b: Regime): Regime {
-  return RANK.indexOf(a) >= RANK.indexOf(b) ? a : b;
-}
+// levelRegime is kept exported here for callers of this module; the rule lives in lineModel.ts.
+export { levelRegime };
 
 /** States of a level without mixing: |J mJ⟩ with the linear energy, for the lower level of a fine-structure-mixed line. */
 function isolatedStates(l: LevelResult, tesla: Dec, muB_h: Dec): LineState[] {
@@ -214,12 +204,13 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
   const termOf = new Map<string, TermFieldResult>();
   for (const t of terms) for (const id of t.levelIds) termOf.set(id, t);
 
-  const regimeOf = (l: LevelResult, tesla: Dec): { hf: Regime; fs: Regime } => {
+  const regimeOf = (l: LevelResult, tesla: Dec): LineSide => {
     const v = levels.get(l.input.id)!.validity;
     const t = termOf.get(l.input.id);
     return {
-      hf: v ? levelRegime(tesla, v.relative.tesla, v.paschenBackTesla) : tesla.isZero() ? "zero field" : "linear Zeeman",
-      fs: t ? levelRegime(tesla, t.limit?.tesla ?? null, t.paschenBackTesla) : tesla.isZero() ? "zero field" : "linear Zeeman",
+      hf: levelRegime(tesla, v?.relative.tesla ?? null, v?.paschenBackTesla ?? null),
+      fs: levelRegime(tesla, t?.limit?.tesla ?? null, t?.paschenBackTesla ?? null),
+      inTerm: t !== undefined,
     };
   };
 
@@ -246,15 +237,15 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
     const hfl = hyperfineConstants(s, l);
     const hfBoth = hfu !== null && hfl !== null;
     const atFields = fields.map((f, at): LineAtFieldResult => {
-      const ru = regimeOf(u, f.tesla);
-      const rl = regimeOf(l, f.tesla);
-      const beyondLinear = (r: Regime) => r === "intermediate" || r === "Paschen–Back";
-      const fsMatters = beyondLinear(ru.fs) || beyondLinear(rl.fs);
+      // the one rule shared with the field calculator (src/engine/)
+      const { regime, model } = chooseLineModel(regimeOf(u, f.tesla), regimeOf(l, f.tesla), {
+        sameSpin: u.input.term.S2 === l.input.term.S2,
+        multipole: ln.input.multipole,
+        hyperfineBoth: hfBoth,
+      });
       const tu = termOf.get(u.input.id);
       const tl = termOf.get(l.input.id);
-      const sameS = u.input.term.S2 === l.input.term.S2;
-      const regime = stronger(stronger(ru.hf, rl.hf), stronger(ru.fs, rl.fs));
-      if (fsMatters && (tu || tl) && sameS && ln.input.multipole !== "M1") {
+      if (model === "fine-structure Paschen–Back eigenstates") {
         const statesOf = (lv: LevelResult, t: TermFieldResult | undefined) =>
           memo(fsStates, `${lv.input.id}\u0000${at}`, () => {
             if (!t) return isolatedStates(lv, f.tesla, muB_h);
@@ -265,24 +256,24 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
         return {
           field: f,
           regime,
-          model: "fine-structure Paschen–Back eigenstates",
+          model,
           components: componentsOf(statesOf(u, tu), statesOf(l, tl), ln.k, reduced),
         };
       }
-      if (hfBoth) {
+      if (model === "hyperfine–Zeeman eigenstates") {
         const statesOf = (lv: LevelResult) =>
           memo(hfStates, `${lv.input.id}\u0000${at}`, () => statesFromHyperfine(lv.J2, levels.get(lv.input.id)!.statesAtFields[at]!));
         return {
           field: f,
           regime,
-          model: "hyperfine–Zeeman eigenstates",
+          model,
           components: componentsOf(statesOf(u), statesOf(l), ln.k, singleReducedElement),
         };
       }
       return {
         field: f,
         regime,
-        model: "J-resolved linear pattern",
+        model,
         components: ln.components.map((x) => ({
           upperLabel: `mJ=${formatDoubled(x.mu2)}`,
           lowerLabel: `mJ=${formatDoubled(x.ml2)}`,

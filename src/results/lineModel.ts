@@ -71,16 +71,20 @@ export interface LineFacts {
   /** Upper and lower level have the same total spin S. */
   sameSpin: boolean;
   multipole: "E1" | "M1" | "E2";
-  /** Both levels have hyperfine structure (nuclear spin and hyperfine constants). */
+  /** Both levels have hyperfine structure (computeFields' hyperfineConstants is not null for either). */
   hyperfineBoth: boolean;
 }
 
 /**
  * Regime of a line at a field and the model its components come from (see
- * the module comment). Worked example: 87Rb D2 at 1 G (both levels with
- * hyperfine structure, fine structure linear) → regime "linear Zeeman",
- * model "hyperfine–Zeeman eigenstates"; Ca⁺ 397 nm without nuclear spin at a
- * field past its 4p term's 1 % limit → "fine-structure Paschen–Back eigenstates".
+ * the module comment). Exact: yes (comparisons only). Worked example (demo
+ * data): 87Rb D2 at 1 G (both levels with hyperfine structure, fine structure
+ * linear; 5²P3/2 already past its 1 % limit, far below its Paschen–Back
+ * scale) → regime "intermediate", model "hyperfine–Zeeman eigenstates";
+ * Ca⁺ 397 nm (no nuclear spin) at 1 T → "J-resolved linear pattern", and at
+ * 10 T, past its 4p term's 1 % limit (about 7.1 T) but below 10× its
+ * Paschen–Back scale → regime "intermediate", model "fine-structure
+ * Paschen–Back eigenstates".
  */
 export function chooseLineModel(upper: LineSide, lower: LineSide, line: LineFacts): { regime: Regime; model: LineModel } {
   const beyondLinear = (r: Regime) => r === "intermediate" || r === "Paschen–Back";

@@ -19,11 +19,8 @@ import { exportAt } from "../engine/exportAt.js";
 
 if (!hasChromium) console.warn(`browser tests skipped: no Chromium at ${CHROMIUM} (install Debian's chromium package or set CHROMIUM_PATH)`);
 
-declare global {
-  interface Window {
-    SublevelAtlas: { at(id: string, field: string | number): AtResult<number>; species(): string[] };
-  }
-}
+/** The page's global, as src/browser/calculator.ts defines it. */
+type CalcWindow = { SublevelAtlas: { at(id: string, field: string | number): AtResult<number>; species(): string[] } };
 
 /** Wait until the calculator has said something, and return what. */
 async function statusOf(page: Page, previous = ""): Promise<string> {
@@ -67,7 +64,7 @@ describe.skipIf(!hasChromium)("field calculator in the browser", () => {
     expect(await page.inputValue("#calc-unit")).toBe("G");
     expect(await page.locator("#calculator").isVisible()).toBe(true);
 
-    const inPage = await page.evaluate(() => window.SublevelAtlas.at("rb87", "4.7 G"));
+    const inPage = await page.evaluate(() => (window as unknown as CalcWindow).SublevelAtlas.at("rb87", "4.7 G"));
     const shown = await shownEnergies(page);
     expect(shown.map((t) => t.caption)).toEqual(inPage.levels.map((l) => expect.stringContaining(`(${l.id}): sublevel energies at 4.7 G`)));
     const cli = await runAt(["rb87", "4.7 G"]);
@@ -94,12 +91,12 @@ describe.skipIf(!hasChromium)("field calculator in the browser", () => {
   it("gives the JSON export's entries at a configured field", async () => {
     const page = await ctx.newPage();
     await page.goto(server.url + "species/rb87/");
-    await page.waitForFunction(() => !!window.SublevelAtlas);
+    await page.waitForFunction(() => !!(window as unknown as CalcWindow).SublevelAtlas);
     const exp = JSON.parse(readFileSync(join(site, "export", "rb87.json"), "utf8")) as { levels: { field_table: { B_T: string; B_text: string }[] }[]; lines: unknown[] };
     const fields = exp.levels[0]!.field_table.map((f) => f.B_text);
     expect(fields.length).toBeGreaterThan(3);
     for (const [i, text] of fields.entries()) {
-      const answer = await page.evaluate((t) => window.SublevelAtlas.at("rb87", t), text);
+      const answer = await page.evaluate((t) => (window as unknown as CalcWindow).SublevelAtlas.at("rb87", t), text);
       expect(answer.B_T).toBe(Number(exp.levels[0]!.field_table[i]!.B_T));
       expectAgrees(answer, exportAt(exp, i), `rb87 at ${text} (export)`);
     }
@@ -145,14 +142,14 @@ describe.skipIf(!hasChromium)("field calculator in the browser", () => {
     expect(await page.locator(".calc-results table").count()).toBe(0);
     const missing = await page.evaluate(() => {
       try {
-        window.SublevelAtlas.at("cs133", "1 G");
+        (window as unknown as CalcWindow).SublevelAtlas.at("cs133", "1 G");
         return "no error";
       } catch (e) {
         return (e as Error).message;
       }
     });
     expect(missing).toMatch(/no field-calculator data for species "cs133" on this page \(loaded: rb87\)/);
-    expect(await page.evaluate(() => window.SublevelAtlas.species())).toEqual(["rb87"]);
+    expect(await page.evaluate(() => (window as unknown as CalcWindow).SublevelAtlas.species())).toEqual(["rb87"]);
   });
 
   it("works from file:// with no network", async () => {
@@ -169,18 +166,18 @@ describe.skipIf(!hasChromium)("field calculator in the browser", () => {
     const lines: string[] = [];
     for (const id of ["cs133", "k40"]) {
       await page.goto(`${server.url}species/${id}/`);
-      await page.waitForFunction(() => !!window.SublevelAtlas);
+      await page.waitForFunction(() => !!(window as unknown as CalcWindow).SublevelAtlas);
       const t = await page.evaluate((id) => {
         const data = (window as unknown as { SublevelAtlasData: Record<string, unknown> }).SublevelAtlasData;
         // a fresh copy: its first answer includes the preparation (the page may have prepared the original already)
         data[`${id}-fresh`] = JSON.parse(JSON.stringify(data[id]));
         let t0 = performance.now();
-        window.SublevelAtlas.at(`${id}-fresh`, "4.7 G");
+        (window as unknown as CalcWindow).SublevelAtlas.at(`${id}-fresh`, "4.7 G");
         const first = performance.now() - t0;
         const times: number[] = [];
         for (const f of ["4.7 G", "0.37 T", "37 mG", "2.2 mT", "3 T", "12 G", "0.05 T", "1 G", "250 G", "7 kG", "0.9 T"]) {
           t0 = performance.now();
-          window.SublevelAtlas.at(id, f);
+          (window as unknown as CalcWindow).SublevelAtlas.at(id, f);
           times.push(performance.now() - t0);
         }
         times.sort((a, b) => a - b);

@@ -1,0 +1,63 @@
+/**
+ * The rule that picks a line's regime and model at a field (src/results/
+ * lineModel.ts), shared by the exact build and the field calculator: its
+ * worked examples on the demo data, the Dec and float64 regime functions
+ * agreeing, and each branch of the choice. The rule is this project's
+ * convention (Methods page); the expected models are what it states.
+ */
+import { describe, expect, it } from "vitest";
+import { Dec } from "../../src/physics/decimal.js";
+import { computeSpecies } from "../../src/results/computeSpecies.js";
+import { computeFields } from "../../src/results/computeFields.js";
+import { chooseLineModel, levelRegime, levelRegimeFloat, strongerRegime, type LineSide } from "../../src/results/lineModel.js";
+import { loadDemo } from "../engine/demo.js";
+
+const { folder, constants } = loadDemo();
+function lineAt(speciesId: string, lineId: string, tesla: string) {
+  const s = computeSpecies(folder.species.find((x) => x.id === speciesId)!, constants);
+  const f = computeFields(s, constants, [{ text: `${tesla} T`, tesla: new Dec(tesla) }]);
+  const a = f.lines.get(lineId)!.atFields[0]!;
+  return [a.regime, a.model];
+}
+
+describe("chooseLineModel", () => {
+  it("repeats its worked examples on the demo data", () => {
+    expect(lineAt("rb87", "D2", "0.0001")).toEqual(["intermediate", "hyperfine–Zeeman eigenstates"]);
+    expect(lineAt("ca40-ion", "397", "1")).toEqual(["linear Zeeman", "J-resolved linear pattern"]);
+    expect(lineAt("ca40-ion", "397", "10")).toEqual(["intermediate", "fine-structure Paschen–Back eigenstates"]);
+  });
+
+  it("takes each branch of the rule", () => {
+    const side = (hf: LineSide["hf"], fs: LineSide["fs"], inTerm: boolean): LineSide => ({ hf, fs, inTerm });
+    const e1 = { sameSpin: true, multipole: "E1" as const, hyperfineBoth: true };
+    const weak = side("linear Zeeman", "linear Zeeman", true);
+    const mixed = side("Paschen–Back", "intermediate", true);
+    expect(chooseLineModel(mixed, weak, e1)).toEqual({ regime: "Paschen–Back", model: "fine-structure Paschen–Back eigenstates" });
+    // M1, a change of spin, or no treated term: the fine-structure states are not used
+    expect(chooseLineModel(mixed, weak, { ...e1, multipole: "M1" }).model).toBe("hyperfine–Zeeman eigenstates");
+    expect(chooseLineModel(mixed, weak, { ...e1, sameSpin: false }).model).toBe("hyperfine–Zeeman eigenstates");
+    expect(chooseLineModel({ ...mixed, inTerm: false }, { ...weak, inTerm: false }, e1).model).toBe("hyperfine–Zeeman eigenstates");
+    expect(chooseLineModel(weak, weak, { ...e1, hyperfineBoth: false })).toEqual({ regime: "linear Zeeman", model: "J-resolved linear pattern" });
+    expect(chooseLineModel(side("zero field", "zero field", false), side("zero field", "zero field", false), e1).regime).toBe("zero field");
+    expect(strongerRegime("intermediate", "linear Zeeman")).toBe("intermediate");
+  });
+
+  it("places a field against a level's limits the same way in Dec and in float64", () => {
+    const cases: [string, string | null, string | null][] = [
+      ["0", "0.001", "0.1"],
+      ["0.001", "0.001", "0.1"],
+      ["0.0010001", "0.001", "0.1"],
+      ["0.999", "0.001", "0.1"],
+      ["1", "0.001", "0.1"],
+      ["5", null, "0.1"],
+      ["5", "0.001", null],
+    ];
+    for (const [b, lin, pb] of cases) {
+      const dec = levelRegime(new Dec(b), lin === null ? null : new Dec(lin), pb === null ? null : new Dec(pb));
+      const flt = levelRegimeFloat(Number(b), lin === null ? null : Number(lin), pb === null ? null : Number(pb));
+      expect(flt, `${b} T`).toBe(dec);
+    }
+    expect(levelRegime(new Dec("1"), new Dec("0.001"), new Dec("0.1"))).toBe("Paschen–Back"); // from 10× the scale on
+    expect(levelRegime(new Dec("0.999"), new Dec("0.001"), new Dec("0.1"))).toBe("intermediate");
+  });
+});
