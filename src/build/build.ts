@@ -98,7 +98,7 @@ export async function buildSite(opts: BuildOptions): Promise<BuildResult> {
   // --- species: restored from the cache, or computed in worker threads (allSpecies.ts); sorted by id ---
   const species = await timedAsync("species", () =>
     buildAllSpecies(folder, snapshot, {
-      setup: { staging, packs, constants: constants.edition, fields, siteUrl, frame },
+      setup: { staging, packs, constants: constants.edition, fields, siteUrl, frame, fault: opts.fault },
       settings: { code: packs ? codeVersion() : "", title: folder.site.title, lab: folder.site.lab, siteUrl: folder.site.siteUrl, pathPrefix: folder.site.pathPrefix, constants: constants.edition, fields },
       workers: opts.workers,
     }),

@@ -30,6 +30,8 @@ export interface SpeciesSetup {
   siteUrl: string | null;
   /** The frame with the real build stamp. */
   frame: SiteFrame;
+  /** Test only: "species" fails each species after its files are written (ATLAS_FAULT, see src/cli/build.ts). */
+  fault?: string;
 }
 
 /** One species to build; plain data. */
@@ -148,6 +150,7 @@ export function runSpeciesTask(task: SpeciesTask, input: SpeciesInput, setup: Sp
     render: tools.render,
     write,
   });
+  if (setup.fault === "species") throw new Error(`building ${task.id} failed (ATLAS_FAULT=species)`);
   const plain = JSON.parse(JSON.stringify(summary)) as SpeciesSummary;
   if (cached && setup.packs) writePack(setup.packs, task.key!, plain, packed);
   return plain;

@@ -9,9 +9,11 @@
  * (cache folder, default .atlas-cache/ beside the output; "off" for none;
  * see src/build/cache.ts), ATLAS_WORKERS (threads for the species at most,
  * default the available parallelism; 1 builds in this thread).
- * Test only: ATLAS_FAULT=render (fail after rendering), selfcheck (corrupt
- * the staged site so the self-checks fail), stall (stop before the
- * self-checks and wait to be signalled; prints "stalled" to stderr), busy
+ * Test only: ATLAS_FAULT=species (fail each species once its files are
+ * written, in whichever thread builds it), render (fail after rendering),
+ * selfcheck (corrupt the staged site so the self-checks fail), stall (stop
+ * before the self-checks and wait to be signalled; prints "stalled" to
+ * stderr), busy
  * (spin synchronously before the staging folder exists, as a long
  * computation does; prints "busy" to stderr).
  * Exit codes: 0 published; 1 input problems or a failed build or

@@ -17,8 +17,8 @@ const out = join(parent, "_site");
 const data = smallDataFolder(parent);
 let before = "";
 
-/** Names beside the output other than the output and the data folder: staging or aside leftovers. */
-const leftovers = (): string[] => readdirSync(parent).filter((n) => n !== basename(out) && n !== basename(data));
+/** Names beside the output other than the output, the data folder and the build cache: staging or aside leftovers. */
+const leftovers = (): string[] => readdirSync(parent).filter((n) => n !== basename(out) && n !== basename(data) && n !== ".atlas-cache");
 
 /** Start a build that stops before its self-checks, and send it `signal` once it says so. */
 function interrupted(signal: NodeJS.Signals): Promise<BuildRun & { staging: string }> {
