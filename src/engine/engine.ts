@@ -9,8 +9,9 @@
  *    diagonalized per M block (hyperfineZeeman.ts, float twin
  *    solveHyperfineZeemanFloat), labels (F, mF) and high-field (mJ, mI) by
  *    the solver's rule;
- *  - every sublevel transition frequency (the list of sublevelTransitionPairs,
- *    upper minus lower energy), for the levels with hyperfine structure;
+ *  - every sublevel transition frequency (upper minus lower energy) of the
+ *    list the build made with sublevelTransitionPairs (in the engine data),
+ *    for the levels with hyperfine structure;
  *  - each line's components (shift from the line centre, relative strength,
  *    polarization, state labels) from the model chooseLineModel picks for the
  *    line at this field (src/results/lineModel.ts, shared with the build):
@@ -23,9 +24,9 @@
  * The tests hold it to 1e-9 relative or 1 Hz (1e-12 for strengths) at the
  * configured fields and between them (test/engine/).
  *
- * Preparation (matrix structure, labels, transition lists: Dec and exact
- * fractions, as prepareHyperfineZeeman does) happens once per species on the
- * first call and is kept with the data object.
+ * Preparation (matrix structure and labels: Dec and exact fractions, as
+ * prepareHyperfineZeeman does) happens once per species on the first call
+ * and is kept with the data object.
  *
  * Worked example: 87Rb 5²S1/2 at 0 T gives F = 1 at −5A/4 and F = 2 at 3A/4
  * (A = 3417.341305452145 MHz), and the clock transition |1, 0⟩ → |2, 0⟩ at
@@ -36,7 +37,6 @@ import { Dec } from "../physics/decimal.js";
 import { formatDoubled, mValues } from "../physics/quantum.js";
 import { prepareHyperfineZeeman, type PreparedLevel } from "../physics/field/hyperfineZeeman.js";
 import { solveHyperfineZeemanFloat, type FloatFieldState } from "../physics/field/hyperfineZeemanFloat.js";
-import { sublevelTransitionPairs } from "../physics/field/sublevelTransitions.js";
 import { fineStructureFloatEigen, type FineStructureFloatEigen, type FineStructureFloatEigenstate } from "../physics/field/fineStructureFloat.js";
 import { lsReducedElement, singleReducedElement } from "../physics/field/lineAtField.js";
 import {
@@ -60,7 +60,9 @@ interface PreparedLevelEntry {
   gJ: number;
   linearUpTo: number | null;
   paschenBack: number | null;
-  transitions: { lo: number; up: number; kind: AtTransition<number>["kind"]; lower: { F: string; mF: string }; upper: { F: string; mF: string } }[];
+  transitions: EngineLevel["transitions"];
+  /** "F", "mF" of each sublevel in the solver's order (labels are structural: the same at every field). */
+  labels: { F: string; mF: string }[];
 }
 
 interface PreparedTerm {
@@ -98,15 +100,16 @@ function prepare(data: EngineData): PreparedSpecies {
   for (const l of data.levels) {
     const level = { J2: l.J2, I2: l.I2, gJ: new Dec(l.gJ), gI: new Dec(l.gI), A: new Dec(l.A), B: new Dec(l.B), muB_h };
     const prepared = prepareHyperfineZeeman(level);
-    const pairs = l.I2 > 0 ? sublevelTransitionPairs(level) : null;
-    const label = (i: number) => ({ F: formatDoubled(pairs!.labels[i]!.F2), mF: formatDoubled(pairs!.labels[i]!.mF2) });
+    const labels: { F: string; mF: string }[] = new Array(prepared.size);
+    for (const b of prepared.blocks) b.outIndex.forEach((pos, k) => (labels[pos] = { F: formatDoubled(b.fByRank[k]!), mF: formatDoubled(b.M2) }));
     levels.set(l.id, {
       data: l,
       prepared,
       gJ: level.gJ.toNumber(),
       linearUpTo: num(l.linearUpToT),
       paschenBack: num(l.paschenBackT),
-      transitions: pairs ? pairs.pairs.map((p) => ({ lo: p.lo, up: p.up, kind: p.kind, lower: label(p.lo), upper: label(p.up) })) : [],
+      transitions: l.transitions,
+      labels,
     });
   }
   const terms = new Map<string, PreparedTerm>();
@@ -182,7 +185,7 @@ export function engineAt(data: EngineData, tesla: number): AtResult<number> {
   for (const lv of sp.levels.values()) {
     const states = solved.get(lv.data.id)!;
     for (const t of lv.transitions) {
-      transitions.push({ level: lv.data.id, lower: t.lower, upper: t.upper, kind: t.kind, Hz: states[t.up]!.energy - states[t.lo]!.energy });
+      transitions.push({ level: lv.data.id, lower: lv.labels[t.lo]!, upper: lv.labels[t.up]!, kind: t.kind, Hz: states[t.up]!.energy - states[t.lo]!.energy });
     }
   }
 

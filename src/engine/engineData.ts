@@ -11,6 +11,7 @@ import { val } from "../physics/constants/constant.js";
 import { hyperfineConstants, solverLevel, type SpeciesFieldResult } from "../results/computeFields.js";
 import type { ConfiguredField } from "../results/fieldTypes.js";
 import type { SpeciesResult } from "../results/types.js";
+import { sublevelTransitionPairs } from "../physics/field/sublevelTransitions.js";
 import { ENGINE_FORMAT, type EngineData } from "./types.js";
 
 const str = (x: Dec): string => x.toString();
@@ -53,6 +54,8 @@ export function engineData(
         fineStructureTerm: fields.termOf.get(l.input.id)?.key ?? null,
         S2: l.input.term.S2,
         L: l.input.term.L,
+        // the list computeFields' sublevelTransitions makes (levels with hyperfine structure only)
+        transitions: lv.I2 > 0 ? sublevelTransitionPairs(lv).pairs.map(({ lo, up, kind }) => ({ lo, up, kind })) : [],
       };
     }),
     terms: fields.terms.map((t) => ({

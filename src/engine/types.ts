@@ -33,6 +33,12 @@ export interface EngineLevel {
   /** Doubled S and L (ordinary integer) of the level's term. */
   S2: number;
   L: number;
+  /**
+   * The level's sublevel transitions as the build lists them
+   * (sublevelTransitionPairs): indices of the lower and upper sublevel in
+   * the solver's (F, mF) order, and the kind. Empty without hyperfine structure.
+   */
+  transitions: { lo: number; up: number; kind: "magnetic-dipole" | "two-photon" }[];
 }
 
 /** A treated fine-structure term: the fine-structure solver's inputs and the regime limits. */
