@@ -53,7 +53,7 @@ describe("npm run at", () => {
     expect(i).toBeGreaterThanOrEqual(0);
     const exp = speciesExport(cs133.result, { constantsEdition: constants.edition, dataVersion: folder.dataVersion }, { result: cs133.fields, configured });
     const { B_T, ...rest } = printed;
-    expect(B_T).toBe("0.001");
+    expect(B_T).toBe("0.001"); // 10 G = 0.001 T (1 G = 1e-4 T, common practice)
     expect(rest).toEqual(exportAt(exp, i));
   });
 
