@@ -99,7 +99,7 @@ describe("a J > 0 level of a species with nuclear spin and no hyperfine constant
     const gJ = s.levels.find((l) => l.input.id === "5s5p-3P1")!.gJ!;
     const muB = new Dec("13996244917.1"); // μB/h, CODATA 2022
     const B = new Dec("1e-3");
-    const want = [];
+    const want: Dec[] = [];
     for (let mJ2 = -2; mJ2 <= 2; mJ2 += 2) for (let mI2 = -9; mI2 <= 9; mI2 += 2) want.push(muB.mul(B).mul(gJ.mul(mJ2).add(s.gI!.mul(mI2))).div(2));
     const got = level.rows.map((r) => r.energies[1]!).sort((a, b) => a.cmp(b));
     want.sort((a, b) => a.cmp(b));
