@@ -30,6 +30,7 @@ import {
 import { hyperfineLinePattern } from "../physics/hyperfineLines.js";
 import { formatDoubled, mValues } from "../physics/quantum.js";
 import type { LevelResult, LineResult, SpeciesResult } from "./types.js";
+import { quadraticPartners } from "./quadraticScope.js";
 import { chooseLineModel, levelRegime, type LineSide } from "./lineModel.js";
 import type {
   ConfiguredField,
@@ -101,12 +102,19 @@ function levelFields(s: SpeciesResult, l: LevelResult, c: ConstantsEdition, fiel
   const perField = fields.map((f) => solve(f.tesla));
   const hasHf = level.I2 > 0;
   const first = perField[0] ?? solve(ZERO);
+  const partners = quadraticPartners(s, l, c, (lv) => hyperfineConstants(s, lv));
+  const quadratic = (F2: number, mF2: number): Dec | null => {
+    // without nuclear spin the level's own part is exactly 0 (no F′ partners)
+    const own = hasHf ? quadraticZeemanCoefficient(level, F2, mF2) : ZERO;
+    const extra = partners.coefficient(F2, mF2);
+    return own === null || extra === null ? null : own.plus(extra);
+  };
   const rows = first.map((st, i) => ({
     F2: st.F2,
     mF2: st.mF2,
     highField: st.highField,
     energies: perField.map((states) => states[i]!.energy),
-    quadraticPerTesla2: hasHf ? quadraticZeemanCoefficient(level, st.F2, st.mF2) : null,
+    quadraticPerTesla2: quadratic(st.F2, st.mF2),
   }));
   const grid = hasHf ? plotFields : null;
   const solveFloat = hasHf ? hyperfineZeemanFloatSolver(prepared) : null;
@@ -116,9 +124,10 @@ function levelFields(s: SpeciesResult, l: LevelResult, c: ConstantsEdition, fiel
   };
   return {
     rows,
+    quadratic: { scope: partners.scope, included: partners.included, missingJ2: partners.missingJ2 },
     statesAtFields: perField,
     validity: hasHf ? linearValidity(level) : null,
-    transitions: hasHf ? sublevelTransitions(level, fields.map((f) => f.tesla), { statesAtFields: perField }) : [],
+    transitions: hasHf ? sublevelTransitions(level, fields.map((f) => f.tesla), { statesAtFields: perField, quadraticExtra: partners.coefficient }) : [],
     plot: grid ? { linear: sample(grid.linear), log: sample(grid.log) } : null,
   };
 }

@@ -10,6 +10,7 @@ import type { FineStructureState, LinearLimit, SpinOrbitFit } from "../physics/f
 import type { HyperfineLineGroup } from "../physics/hyperfineLines.js";
 import type { Polarization } from "../physics/linePattern.js";
 import type { FieldState } from "../physics/field/hyperfineZeeman.js";
+import type { QuadraticScope } from "./quadraticScope.js";
 
 export interface ConfiguredField {
   text: string;
@@ -24,12 +25,18 @@ export interface FieldRow {
   highField: { mJ2: number; mI2: number };
   /** Energy E/h (Hz) from the hyperfine-free level centre, one per configured field. */
   energies: Dec[];
-  /** Second-order coefficient (Hz/T²); null when perturbation theory fails or there is no hyperfine structure. */
+  /**
+   * Second-order coefficient (Hz/T²): the level's own hyperfine partners F′
+   * plus its listed fine-structure partners J′ (see LevelFieldResult.quadratic
+   * for which); null when perturbation theory fails (degenerate levels).
+   */
   quadraticPerTesla2: Dec | null;
 }
 
 export interface LevelFieldResult {
   rows: FieldRow[];
+  /** What the second-order coefficients of `rows` include (src/results/quadraticScope.ts). */
+  quadratic: { scope: QuadraticScope; included: string[]; missingJ2: number[] };
   /** The solver's states at each configured field (reused by the line calculations). */
   statesAtFields: FieldState[][];
   /** Null for a level without hyperfine structure. */

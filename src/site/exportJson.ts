@@ -36,14 +36,14 @@ function levelFieldExport(f: LevelFieldResult, fields: ConfiguredField[]) {
         high_field: { mJ: formatDoubled(r.highField.mJ2), mI: formatDoubled(r.highField.mI2) },
       })),
     })),
-    quadratic: f.validity
-      ? f.rows.map((r) => ({
-          F: formatDoubled(r.F2),
-          mF: formatDoubled(r.mF2),
-          Hz_per_T2: num(r.quadraticPerTesla2),
-          Hz_per_G2: r.quadraticPerTesla2 === null ? null : num(r.quadraticPerTesla2.mul("1e-8")),
-        }))
-      : [],
+    quadratic: f.rows.map((r) => ({
+      F: formatDoubled(r.F2),
+      mF: formatDoubled(r.mF2),
+      Hz_per_T2: num(r.quadraticPerTesla2),
+      Hz_per_G2: r.quadraticPerTesla2 === null ? null : num(r.quadraticPerTesla2.mul("1e-8")),
+      scope: f.quadratic.scope,
+    })),
+    quadratic_partners: f.quadratic.included,
     linear_validity: f.validity
       ? {
           within_1_percent_up_to_T: num(f.validity.relative.tesla),

@@ -64,7 +64,8 @@ export function energiesTable(l: LevelResult, f: LevelFieldResult, fields: Confi
         { key: "hf_mJ", label: "high-field mJ", kind: "quantum", when: full && hasHf, cell: (r) => quantumCell(r.highField.mJ2, true) },
         { key: "hf_mI", label: "high-field mI", kind: "quantum", when: full && hasHf, cell: (r) => quantumCell(r.highField.mI2, true) },
         {
-          key: "quad", label: "quadratic", unit: "Hz/G²", kind: "number", when: full && hasHf,
+          // levels without nuclear spin have no full table: their coefficient goes into the short one
+          key: "quad", label: `quadratic${QUAD_SCOPE[f.quadratic.scope]}`, unit: "Hz/G²", kind: "number", when: full === hasHf,
           cell: (r) => numberCell(r.quadraticPerTesla2 === null ? null : r.quadraticPerTesla2.mul("1e-8"), 7),
         },
         ...fields.map((b, i) => ({
@@ -77,12 +78,24 @@ export function energiesTable(l: LevelResult, f: LevelFieldResult, fields: Confi
   );
 }
 
+const QUAD_SCOPE = { term: "", "term-partial": " (listed partners only)", "J-only": " (within this J only)" } as const;
+
+/** What a level's second-order coefficients include. */
+export function quadraticFact(f: LevelFieldResult): string {
+  const q = f.quadratic;
+  const missing = q.missingJ2.map((j) => `J = ${formatDoubled(j)}`).join(" and ");
+  if (q.scope === "J-only") return `Quadratic coefficients within this J only: the fine-structure partners (${missing}) are not listed with energies.`;
+  const partners = q.included.length ? `include the fine-structure partners ${q.included.join(", ")} (second order through the Zeeman coupling between J levels of the term)` : "are complete: the term has no other J the field couples to";
+  return `Quadratic coefficients ${partners}${q.scope === "term-partial" ? `; ${missing} of the term not listed with an energy, so not included` : ""}.`;
+}
+
 /** Sentences on where a level's linear numbers stop holding. */
 export function validityFacts(f: LevelFieldResult): string[] {
   const v = f.validity;
-  if (!v) return ["No hyperfine structure: in this model the shifts are exactly linear; see the fine-structure section where partners are listed."];
+  if (!v) return ["No hyperfine structure: in this model the shifts are exactly linear; see the fine-structure section where partners are listed.", quadraticFact(f)];
   const first = (s: { F2: number; mF2: number } | null) => (s ? ` (first to leave: F = ${formatDoubled(s.F2)}, mF = ${formatDoubled(s.mF2)})` : "");
   return [
+    quadraticFact(f),
     `Linear shifts within 1 % of the exact ones up to ${fieldText(v.relative.tesla)}${first(v.relative.sublevel)}.`,
     `Linear shifts within 1 kHz of the exact ones up to ${fieldText(v.absolute.tesla)}${first(v.absolute.sublevel)}.`,
     ...(v.paschenBackTesla ? [`Hyperfine Paschen–Back scale (largest hyperfine interval over μB·|gJ|/h): ${fieldText(v.paschenBackTesla)}; well above it the states are |mJ, mI⟩.`] : []),

@@ -16,7 +16,8 @@
  *
  * For each line: zero-field frequency (exact, hyperfine.ts); first-order
  * sensitivity (μB/h)(gF′mF′ − gF·mF) (exact); second-order sensitivity
- * β′ − β (quadraticZeeman.ts, exact, null when perturbation theory fails);
+ * β′ − β (quadraticZeeman.ts, plus the caller's `quadraticExtra` such as
+ * the fine-structure partners' part; null when perturbation theory fails);
  * the exact frequency at each requested field (hyperfineZeeman.ts, exact
  * Dec solve); and each field-insensitive point df/dB = 0 in (fromTesla,
  * toTesla), default (1e-8 T, 1 T).
@@ -94,6 +95,12 @@ export interface TransitionOptions {
    * most of the cost when a caller tabulates energies at the same fields).
    */
   statesAtFields?: readonly (readonly FieldState[])[];
+  /**
+   * A further second-order coefficient (Hz/T²) per sublevel, added to the
+   * within-level one of quadraticZeeman.ts: the fine-structure partners'
+   * part (partnerQuadratic.ts). Null where it fails; absent means 0.
+   */
+  quadraticExtra?: (F2: number, mF2: number) => Dec | null;
 }
 
 const GAUSS = new Dec("1e-4");
@@ -171,7 +178,11 @@ export function sublevelTransitions(level: HyperfineZeemanLevel, fields: readonl
   const where: Slot[] = new Array(prepared.size);
   for (const b of prepared.blocks) b.outIndex.forEach((pos, rank) => (where[pos] = { block: b, rank }));
   const { labels, zeroField: e0, linear: lin, pairs } = sublevelTransitionPairs(level);
-  const quad = labels.map((s) => quadraticZeemanCoefficient(level, s.F2, s.mF2));
+  const quad = labels.map((s) => {
+    const own = quadraticZeemanCoefficient(level, s.F2, s.mF2);
+    const extra = options.quadraticExtra ? options.quadraticExtra(s.F2, s.mF2) : ZERO;
+    return own === null || extra === null ? null : own.plus(extra);
+  });
   // states come back from the solvers in the same (F, mF) order as `labels`
   const given = options.statesAtFields;
   if (given && (given.length !== fields.length || given.some((st) => st.length !== prepared.size))) {
