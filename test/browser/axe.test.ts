@@ -8,7 +8,20 @@ import { CHROMIUM, hasChromium, watchPage, closeDemo, openDemo, type StaticServe
 if (!hasChromium) console.warn(`browser tests skipped: no Chromium at ${CHROMIUM} (install Debian's chromium package or set CHROMIUM_PATH)`);
 
 // One page of each type; the bench sheets only where the build writes them.
-const PAGES = ["index.html", "species/rb87/index.html", "species/sr88/index.html", "constants/index.html", "methods/index.html", "sheet/index.html", "species/rb87/sheet/index.html"];
+const PAGES = [
+  "index.html",
+  "species/rb87/index.html",
+  "species/sr88/index.html",
+  "species/rb87/level/5s-S1_2/index.html",
+  "species/rb87/line/D2/index.html",
+  // k40 D2 is too large for one page: one page per field; its 4p 2P3/2 transitions have a page of their own.
+  "species/k40/line/D2/B-1T/index.html",
+  "species/k40/level/4p-P3_2/transitions/index.html",
+  "constants/index.html",
+  "methods/index.html",
+  "sheet/index.html",
+  "species/rb87/sheet/index.html",
+];
 
 describe.skipIf(!hasChromium)("accessibility of every page type (axe-core), with the scripts running", () => {
   let site: string;

@@ -111,7 +111,8 @@ describe.skipIf(!hasChromium)("shift unit choice in the browser", () => {
     await page.selectOption("#unit-choice", "GHz/T");
     await page.goto(server.url + "species/cs133/");
     expect(await page.inputValue("#unit-choice")).toBe("GHz/T");
-    const row = await page.evaluate(() => document.querySelector("th[data-switchable]")!.closest("table")!.tBodies[0]!.rows[0]!.id);
+    // The first row of a level's mJ table (shift in MHz/G, switchable, beside the fixed GHz/T column).
+    const row = await page.evaluate(() => document.querySelector('table[id^="table-mj:"]')!.querySelector("tbody tr")!.id);
     const c = await cells(page, row);
     expect([c.header, c.switchable]).toEqual(["(GHz/T)", c.GHzT]);
     await page.reload();
