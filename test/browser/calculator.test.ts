@@ -10,6 +10,7 @@ import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { pathToFileURL } from "node:url";
 import type { BrowserContext, Page } from "playwright-core";
+import { AxeBuilder } from "@axe-core/playwright";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { AtResult } from "../../src/engine/types.js";
 import { CHROMIUM, hasChromium, watchPage, closeDemo, openDemo, type StaticServer } from "../support/browser.js";
@@ -151,6 +152,19 @@ describe.skipIf(!hasChromium)("field calculator in the browser", () => {
     expect(missing).toMatch(/no field-calculator data for species "cs133" on this page \(loaded: rb87\)/);
     expect(await page.evaluate(() => (window as unknown as CalcWindow).SublevelAtlas.species())).toEqual(["rb87"]);
   });
+
+  it("has no serious or critical accessibility violations with results and with an error showing", async () => {
+    const page = await ctx.newPage();
+    for (const hash of ["#B=4.7G", "#B=4.7Hz"]) {
+      await page.goto(server.url + "species/rb87/line/D2/" + hash);
+      await statusOf(page);
+      const result = await new AxeBuilder({ page }).include("#calculator").analyze();
+      const bad = result.violations
+        .filter((v) => v.impact === "serious" || v.impact === "critical")
+        .map((v) => `${v.id} (${v.impact}): ${v.nodes.slice(0, 3).map((n) => n.target.join(" ")).join(", ")}`);
+      expect(bad, hash).toEqual([]);
+    }
+  }, 120_000);
 
   it("works from file:// with no network", async () => {
     const page = await ctx.newPage();
