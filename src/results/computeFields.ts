@@ -81,6 +81,11 @@ export function solverLevel(s: SpeciesResult, l: LevelResult, c: ConstantsEditio
   };
 }
 
+/** Field-insensitive points are searched up to the larger of 1 T and twice the largest configured field. */
+export function insensitiveSearchLimit(fields: ConfiguredField[]): Dec {
+  return Dec.max(new Dec(1), ...fields.map((f) => f.tesla.mul(2)));
+}
+
 function plotGrid(fields: ConfiguredField[]): { linear: Dec[]; log: Dec[] } | null {
   const positive = fields.map((f) => f.tesla).filter((t) => t.gt(0));
   if (positive.length === 0) return null;
@@ -103,6 +108,7 @@ function levelFields(s: SpeciesResult, l: LevelResult, c: ConstantsEdition, fiel
   const hasHf = level.I2 > 0;
   const first = perField[0] ?? solve(ZERO);
   const partners = quadraticPartners(s, l, c, (lv) => hyperfineConstants(s, lv));
+  const searchTo = insensitiveSearchLimit(fields);
   const quadratic = (F2: number, mF2: number): Dec | null => {
     // without nuclear spin the level's own part is exactly 0 (no F′ partners)
     const own = hasHf ? quadraticZeemanCoefficient(level, F2, mF2) : ZERO;
@@ -127,7 +133,10 @@ function levelFields(s: SpeciesResult, l: LevelResult, c: ConstantsEdition, fiel
     quadratic: { scope: partners.scope, included: partners.included, missingJ2: partners.missingJ2 },
     statesAtFields: perField,
     validity: hasHf ? linearValidity(level) : null,
-    transitions: hasHf ? sublevelTransitions(level, fields.map((f) => f.tesla), { statesAtFields: perField, quadraticExtra: partners.coefficient }) : [],
+    transitions: hasHf
+      ? sublevelTransitions(level, fields.map((f) => f.tesla), { statesAtFields: perField, quadraticExtra: partners.coefficient, toTesla: searchTo })
+      : [],
+    insensitiveSearchTesla: searchTo,
     plot: grid ? { linear: sample(grid.linear), log: sample(grid.log) } : null,
   };
 }

@@ -42,6 +42,8 @@ export interface LevelFieldResult {
   /** Null for a level without hyperfine structure. */
   validity: LinearValidity | null;
   transitions: SublevelTransition[];
+  /** Upper end of the field-insensitive search of `transitions`, T: max(1 T, twice the largest configured field). */
+  insensitiveSearchTesla: Dec;
   /** Energies for the plots (float64, plot-only): sample fields (T) and one energy list per row. */
   plot: { linear: { fields: Dec[]; energies: number[][] }; log: { fields: Dec[]; energies: number[][] } } | null;
 }

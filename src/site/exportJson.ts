@@ -62,6 +62,7 @@ function levelFieldExport(f: LevelFieldResult, fields: ConfiguredField[]) {
       at_fields: t.atFields.map((a) => ({ B_T: fieldText(a.tesla), Hz: num(a.hz) })),
       field_insensitive: t.fieldInsensitive.map((p) => ({ B_T: num(p.tesla), Hz: num(p.hz) })),
     })),
+    field_insensitive_searched_up_to_T: num(f.insensitiveSearchTesla),
   };
 }
 

@@ -3,8 +3,9 @@
  * (radio-frequency and microwave lines), with their field dependence.
  *
  * Which pairs: magnetic-dipole lines ΔF = 0, ±1 with ΔmF = 0, ±1, except
- * ΔF = 0 with ΔmF = 0 (no transition); and two-photon lines ΔmF = ±2 between
- * different F with |ΔF| ≤ 2 (two magnetic-dipole steps). Reference for the
+ * ΔF = 0 with ΔmF = 0 (no transition); and two-photon lines ΔmF = ±2 with
+ * |ΔF| ≤ 2, ΔF = 0 included (two magnetic-dipole steps, each |ΔF| ≤ 1 and
+ * |ΔmF| = 1). Reference for the
  * selection rules: A. Corney, "Atomic and Laser Spectroscopy" (Oxford, 1977),
  * ch. 4 and 16.
  *
@@ -19,8 +20,10 @@
  * β′ − β (quadraticZeeman.ts, plus the caller's `quadraticExtra` such as
  * the fine-structure partners' part; null when perturbation theory fails);
  * the exact frequency at each requested field (hyperfineZeeman.ts, exact
- * Dec solve); and each field-insensitive point df/dB = 0 in (fromTesla,
- * toTesla), default (1e-8 T, 1 T).
+ * Dec solve); and each field-insensitive point df/dB = 0: B = 0 itself when
+ * the first-order sensitivity vanishes exactly (mF = 0 ↔ mF = 0 clock lines,
+ * and any pair with gF′mF′ = gF·mF), then every root in (fromTesla, toTesla),
+ * default (1e-8 T, 1 T).
  *
  * Method for the field-insensitive points: df/dB is the difference of the
  * Hellmann–Feynman slopes. It is sampled on a geometric grid (default 20
@@ -136,9 +139,10 @@ export interface TransitionPairs {
  * sublevelTransitions and by the field calculator (src/engine/), so both list
  * the same lines in the same order. Exact (Rational/Dec comparisons).
  *
- * Worked example: 87Rb 5²S1/2 (F = 1, 2) has 19 lines: 15 magnetic-dipole
+ * Worked example: 87Rb 5²S1/2 (F = 1, 2) has 23 lines: 15 magnetic-dipole
  * (4 within F = 2, 2 within F = 1, 9 between F = 1 and 2 with ΔmF = 0, ±1)
- * and 4 two-photon ones (ΔmF = ±2 between F = 1 and 2); the first listed
+ * and 8 two-photon ones (ΔmF = ±2: 4 between F = 1 and 2, 3 within F = 2,
+ * 1 within F = 1); the first listed
  * has lower |F=1, mF=0⟩ and upper |F=1, mF=−1⟩ (gF(1) < 0).
  */
 export function sublevelTransitionPairs(level: HyperfineZeemanLevel): TransitionPairs {
@@ -161,7 +165,7 @@ export function sublevelTransitionPairs(level: HyperfineZeemanLevel): Transition
       const dM = Math.abs(a.mF2 - b.mF2);
       let kind: Pair["kind"] | null = null;
       if (dF <= 2 && dM <= 2 && !(dF === 0 && dM === 0)) kind = "magnetic-dipole";
-      if (dM === 4 && dF >= 2 && dF <= 4) kind = "two-photon";
+      if (dM === 4 && dF <= 4) kind = "two-photon";
       if (!kind) continue;
       const [lo, up] = higher(i, j) > 0 ? [j, i] : [i, j];
       pairs.push({ lo, up, kind });
@@ -231,7 +235,8 @@ export function sublevelTransitions(level: HyperfineZeemanLevel, fields: readonl
       firstOrder: { hzPerTesla: first, hzPerGauss: first.mul(GAUSS) },
       secondOrder: second === null ? null : { hzPerTesla2: second, hzPerGauss2: second.mul(GAUSS2) },
       atFields: atFields.map(({ tesla, states }) => ({ tesla, hz: freq(states, p) })),
-      fieldInsensitive: roots[k]!,
+      // df/dB at B = 0 is the first-order sensitivity: when it vanishes, B = 0 is a field-insensitive point
+      fieldInsensitive: first.isZero() ? [{ tesla: ZERO, hz: e0[p.up]!.minus(e0[p.lo]!) }, ...roots[k]!] : roots[k]!,
     };
   });
 }

@@ -27,6 +27,26 @@ describe("sublevelTransitions", () => {
     expect(l.atFields[0]!.hz.toString()).toBe("6834682610.90429");
   });
 
+  it("reports B = 0 as the clock line's field-insensitive point, at 2A (issue 10, defect 5)", () => {
+    const l = find([2, 0], [4, 0]);
+    // mF = 0 ↔ mF = 0: df/dB = 0 at B = 0 (common practice: first-order field-insensitive clock transition);
+    // frequency there 6834.682610904290 MHz (D. A. Steck, "Rubidium 87 D Line Data")
+    expect(l.fieldInsensitive[0]!.tesla.isZero()).toBe(true);
+    expect(l.fieldInsensitive[0]!.hz.toString()).toBe("6834682610.90429");
+    // a line with first-order sensitivity gets no B = 0 point
+    expect(find([2, -2], [4, 2]).fieldInsensitive.every((p) => p.tesla.gt(0))).toBe(true);
+  });
+
+  it("lists the two-photon lines ΔF = 0, ΔmF = ±2 (issue 10, defect 5)", () => {
+    const z = find([4, -2], [4, 2]);
+    expect(z.kind).toBe("two-photon");
+    expect(z.zeroFieldHz.isZero()).toBe(true);
+    // two units of mF in F = 2 with gF ≈ 1/2: about 1.40 MHz/G (common practice: 0.70 MHz/G per unit mF, Steck)
+    expect(Math.abs(z.firstOrder.hzPerGauss.toNumber() / 1.3996e6 - 1)).toBeLessThan(0.001);
+    // in F = 1 (gF < 0) mF = −1 has the larger slope, so it is the upper end
+    expect(find([2, 2], [2, -2]).kind).toBe("two-photon");
+  });
+
   it("lists ΔF = 0 Zeeman lines and excludes ΔF = 0, ΔmF = 0", () => {
     expect(lines.some((l) => l.lower.F2 === l.upper.F2 && l.lower.mF2 === l.upper.mF2)).toBe(false);
     const z = find([4, 0], [4, 2]);
