@@ -3,16 +3,14 @@
  * formatNumber): `sig` significant digits, thin-space groups of three on
  * both sides of the point (four digits stay together), a true minus sign,
  * and the ×10ⁿ form when the leading digit is at 10¹² or above, or 10⁻⁶ or
- * below. Plain string work, without decimal.js, so the calculator can write
- * thousands of cells quickly: the shortest decimal text of the float64 value
- * (what String(x) gives) rounded half-even to `sig` digits, exactly what
- * formatNumber does with a Dec made from that text (the test compares both).
+ * below. The fixed form is plain string work, without decimal.js, so the
+ * calculator can write thousands of cells quickly: the shortest decimal text
+ * of the float64 value (what String(x) gives) rounded half-even to `sig`
+ * digits, exactly what formatNumber does with a Dec made from that text (the
+ * test compares both); the rare ×10ⁿ form is left to formatNumber itself.
  */
-import { groupDigits, MINUS } from "../site/format.js";
-
-const SUPERSCRIPT: Record<string, string> = {
-  "0": "⁰", "1": "¹", "2": "²", "3": "³", "4": "⁴", "5": "⁵", "6": "⁶", "7": "⁷", "8": "⁸", "9": "⁹", "-": "⁻",
-};
+import { Dec } from "../physics/decimal.js";
+import { formatNumber, groupDigits, MINUS } from "../site/format.js";
 
 export function formatFloat(x: number, sig = 9): string {
   if (!Number.isFinite(x)) return "—";
@@ -39,13 +37,8 @@ export function formatFloat(x: number, sig = 9): string {
     }
   }
   digits = digits.padEnd(sig, "0");
-  const mant = digits.length > 1 ? `${digits[0]}.${digits.slice(1)}` : digits;
-  if (e >= 12 || e <= -6) {
-    const [i, f] = mant.split(".") as [string, string | undefined];
-    const frac = f ? f.replace(/0+$/, "") : "";
-    const exp = "×10" + [...String(e)].map((ch) => SUPERSCRIPT[ch] ?? ch).join("");
-    return sign + i + (frac ? "." + groupDigits(frac, true) : f !== undefined ? "." : "") + exp;
-  }
+  // the ×10ⁿ form is rare in the calculator's tables: the site's own writer does it (one rule)
+  if (e >= 12 || e <= -6) return formatNumber(new Dec(String(x)), sig);
   let int: string;
   let frac: string;
   if (e >= 0) {
