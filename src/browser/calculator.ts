@@ -21,6 +21,7 @@ import { engineAt, prepareEngine } from "../engine/engine.js";
 import { parseFieldText } from "../engine/fieldText.js";
 import { ENGINE_FORMAT, type AtResult, type EngineData } from "../engine/types.js";
 import { formatFloat } from "./formatFloat.js";
+import { polarizationSymbol } from "../site/format.js";
 
 declare global {
   interface Window {
@@ -217,7 +218,7 @@ function render(w: Widget, data: EngineData, answer: AtResult<number>, fieldText
           ln.components.map((c) => [
             signed(c.upper.replace(/=-/g, "=\u2212")),
             signed(c.lower.replace(/=-/g, "=\u2212")),
-            c.polarization === "sigma+" ? "σ+" : c.polarization === "sigma-" ? "σ−" : c.polarization === "pi" ? "π" : "—",
+            polarizationSymbol(c.polarization),
             { text: show(c.relative_strength, 6), value: c.relative_strength },
             { text: show(c.shift_Hz / MHZ, 10), value: c.shift_Hz },
           ]),
