@@ -22,10 +22,10 @@ import {
   termStateAnchor,
   transitionAnchor,
 } from "./anchors.js";
-import { formatNumber, polarizationSymbol } from "./format.js";
+import { formatNumber, polarizationSymbol, termText } from "./format.js";
 import { fieldPlotSvg } from "./plots/fieldPlot.js";
 import { stickPlotSvg } from "./plots/stickPlot.js";
-import { safeFile, type TableHome } from "./linearTables.js";
+import { csvName, safeFile, type TableHome } from "./linearTables.js";
 import { fractionCell, numberCell, quantumCell, textCell, type Table } from "./table.js";
 import { makeTable } from "./tableSpec.js";
 
@@ -54,8 +54,8 @@ export function energiesTable(l: LevelResult, f: LevelFieldResult, fields: Confi
   return makeTable<FieldRow>(
     {
       id: full ? `field-full:${lid}` : `field:${lid}`,
-      caption: `${l.input.term.text} (${lid}): exact sublevel energies at the bias fields, from the level centre`,
-      csvPath: `${home.csvBase}/field-${safeFile(lid)}-energies${full ? "-full" : ""}.csv`,
+      caption: `${lid} ${termText(l.input.term)}: exact sublevel energies at the bias fields, from the level centre`,
+      csvPath: csvName(home, lid, full ? "field-energies-full" : "field-energies"),
       exportUrl: home.exportUrl,
       anchor: (r) => fieldStateAnchor(lid, r.F2, r.mF2),
       columns: [
@@ -109,7 +109,7 @@ export function levelPlots(l: LevelResult, f: LevelFieldResult, fields: Configur
   const curves = (energies: readonly (readonly number[])[]) =>
     f.rows.map((r, i) => ({ label: `F=${formatDoubled(r.F2)}, mF=${formatDoubled(r.mF2).replace(/^-/, "−")}`, energies: energies[i]! }));
   const common = {
-    title: `${l.input.term.text} (${lid}): sublevel energies against field`,
+    title: `${lid} ${termText(l.input.term)}: sublevel energies against field`,
     description: `Energy of each (F, mF) sublevel of ${lid} from the level centre as the field grows; vertical rules mark the bias fields.`,
     rules: fields.filter((b) => b.tesla.gt(0)).map((b) => ({ tesla: b.tesla, label: b.text })),
   };
@@ -127,8 +127,8 @@ export function transitionsTable(l: LevelResult, f: LevelFieldResult, fields: Co
   return makeTable<SublevelTransition>(
     {
       id: `rf:${lid}`,
-      caption: `${l.input.term.text} (${lid}): transitions between sublevels (microwave and radio frequency)`,
-      csvPath: `${home.csvBase}/field-${safeFile(lid)}-transitions.csv`,
+      caption: `${lid} ${termText(l.input.term)}: transitions between sublevels (microwave and radio frequency)`,
+      csvPath: csvName(home, lid, "transitions"),
       exportUrl: home.exportUrl,
       anchor: (t) => transitionAnchor(lid, t.lower, t.upper),
       columns: [
@@ -147,7 +147,7 @@ export function transitionsTable(l: LevelResult, f: LevelFieldResult, fields: Co
           cell: (t) =>
             textCell(
               t.fieldInsensitive.length === 0
-                ? "none below 1 T"
+                ? `none below ${fieldText(f.insensitiveSearchTesla)}`
                 : t.fieldInsensitive.map((p) => `${fieldText(p.tesla, 7)} (${formatNumber(p.hz.div(MHZ), 12)} MHz)`).join("; "),
             ),
         },
@@ -177,7 +177,7 @@ export function termTable(t: TermFieldResult, fields: ConfiguredField[], home: T
     {
       id: `term:${termKey(t.key)}`,
       caption: `${t.key}: fine-structure states at the bias fields (spin–orbit + Zeeman in |mL mS⟩)`,
-      csvPath: `${home.csvBase}/term-${safeFile(t.key)}.csv`,
+      csvPath: csvName(home, "term", termKey(t.key)),
       exportUrl: home.exportUrl,
       anchor: (st) => termStateAnchor(t.key, st.J2, st.mJ2),
       columns: [
@@ -204,7 +204,7 @@ export function hyperfineGroupsTable(ln: LineResult, groups: HyperfineLineGroup[
     {
       id: `hfl:${id}`,
       caption: `${id}: hyperfine lines F → F′ at low field`,
-      csvPath: `${home.csvBase}/line-${safeFile(id)}-hyperfine.csv`,
+      csvPath: csvName(home, id, "hyperfine-groups"),
       exportUrl: home.exportUrl,
       anchor: (g) => hyperfineGroupAnchor(id, g.Fu2, g.Fl2),
       columns: [
@@ -229,7 +229,7 @@ export function hyperfineComponentsTable(ln: LineResult, groups: HyperfineLineGr
     {
       id: `hfc:${id}`,
       caption: `${id}: hyperfine Zeeman components at low field (cycling lines marked)`,
-      csvPath: `${home.csvBase}/line-${safeFile(id)}-hyperfine-components.csv`,
+      csvPath: csvName(home, id, "hyperfine-components"),
       exportUrl: home.exportUrl,
       anchor: ({ g, c }) => hyperfineComponentAnchor(id, g.Fu2, c.mFu2, g.Fl2, c.mFl2),
       columns: [
@@ -237,7 +237,7 @@ export function hyperfineComponentsTable(ln: LineResult, groups: HyperfineLineGr
         { key: "mFu", label: "mF upper", kind: "quantum", cell: ({ c }) => quantumCell(c.mFu2, true) },
         { key: "Fl", label: "F lower", kind: "quantum", cell: ({ g }) => quantumCell(g.Fl2) },
         { key: "mFl", label: "mF lower", kind: "quantum", cell: ({ c }) => quantumCell(c.mFl2, true) },
-        { key: "pol", label: "polarization", kind: "text", cell: ({ c }) => textCell(polarizationSymbol(c.polarization)) },
+        { key: "pol", label: "polarization", kind: "text", cell: ({ c }) => textCell(polarizationSymbol(c.polarization, (c.mFu2 - c.mFl2) / 2)) },
         { key: "S", label: "strength (of line)", kind: "fraction", cell: ({ c }) => fractionCell(c.strength) },
         { key: "shift", label: "shift", unit: "MHz/G", kind: "number", cell: ({ c }) => numberCell(c.shiftHzPerT.mul("1e-10"), 9) },
         { key: "cyc", label: "cycling", kind: "text", cell: ({ c }) => textCell(c.cycling ? "cycling" : "") },
@@ -256,13 +256,13 @@ export function atFieldTable(ln: LineResult, a: LineAtFieldResult, home: TableHo
     {
       id: `atB:${id}:${tesla}T`,
       caption: `${id} at ${a.field.text}: components (${a.model})`,
-      csvPath: `${home.csvBase}/line-${safeFile(id)}-B-${safeFile(a.field.text)}.csv`,
+      csvPath: csvName(home, id, "at", a.field.text.replace(/\s+/g, "")),
       exportUrl: home.exportUrl,
       anchor: (c) => componentAtFieldAnchor(id, tesla, c.upperLabel, c.lowerLabel),
       columns: [
         { key: "upper", label: "upper state", kind: "text", cell: (c) => textCell(c.upperLabel.replace(/-/g, "−")) },
         { key: "lower", label: "lower state", kind: "text", cell: (c) => textCell(c.lowerLabel.replace(/-/g, "−")) },
-        { key: "pol", label: "polarization", kind: "text", cell: (c) => textCell(polarizationSymbol(c.polarization)) },
+        { key: "pol", label: "polarization", kind: "text", cell: (c) => textCell(polarizationSymbol(c.polarization, c.q)) },
         { key: "strength", label: "relative strength", kind: "number", cell: (c) => numberCell(c.strength, 6) },
         { key: "shift", label: "shift from line centre", unit: "MHz", kind: "number", cell: (c) => numberCell(c.shiftHz.div(MHZ), 10) },
         {

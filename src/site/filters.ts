@@ -3,6 +3,7 @@
  * and the standalone Nunjucks environment that renders species pages
  * (src/build/renderPages.ts), so both kinds of page are written alike.
  */
+import { readableDate } from "./format.js";
 import { relativeUrl } from "./relativeUrl.js";
 import { tableRowsHtml } from "./tableRows.js";
 import type { Table } from "./table.js";
@@ -14,4 +15,6 @@ export const atlasFilters = {
   toJson: (value: unknown): string => JSON.stringify(value),
   // The relative path from a page to the site root ("./", "../../"), for <body data-root> (finder links).
   rootPath: (pageUrl: string): string => relativeUrl("/index.html", pageUrl).replace(/index\.html$/, "") || "./",
+  // An ISO build date as people read it ("2 December 2026, 03:23 UTC"); the ISO form stays in <time datetime> and <meta>.
+  readableDate: (iso: string): string => readableDate(iso),
 } as const;

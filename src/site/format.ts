@@ -7,48 +7,11 @@
 import { Dec } from "../physics/decimal.js";
 import type { Rational } from "../physics/rational.js";
 import { formatDoubled } from "../physics/quantum.js";
+import { groupDigits, MINUS, SUPERSCRIPT, type NumberParts } from "./plainFormat.js";
 
-export const THIN_SPACE = "\u2009";
-export const MINUS = "\u2212";
-export const FIGURE_SPACE = "\u2007";
-
-/**
- * Digits in groups of three with thin spaces, counted from the decimal point.
- * Four digits stay together (common practice) unless `force` is set, which a
- * column uses when any of its numbers needs grouping, so a column is grouped
- * one way throughout.
- */
-export function groupDigits(digits: string, fromLeft: boolean, force = false): string {
-  return group(digits, fromLeft, force);
-}
-
-function group(digits: string, fromLeft: boolean, force = false): string {
-  if (digits.length <= (force ? 3 : 4)) return digits;
-  const parts: string[] = [];
-  if (fromLeft) {
-    for (let i = 0; i < digits.length; i += 3) parts.push(digits.slice(i, i + 3));
-  } else {
-    for (let i = digits.length; i > 0; i -= 3) parts.unshift(digits.slice(Math.max(0, i - 3), i));
-  }
-  return parts.join(THIN_SPACE);
-}
-
-const SUPERSCRIPT: Record<string, string> = {
-  "0": "⁰", "1": "¹", "2": "²", "3": "³", "4": "⁴", "5": "⁵", "6": "⁶", "7": "⁷", "8": "⁸", "9": "⁹", "-": "⁻",
-};
-
-/** Parts of a shown number, so templates can align on the decimal point. */
-export interface NumberParts {
-  sign: string;
-  int: string;
-  /** Decimal point and fraction digits, grouped; "" for an integer. */
-  frac: string;
-  /** Concise uncertainty "(20)" or " ± 0.1", as written in the data; "" if none. */
-  unc?: string;
-  exp: string;
-  /** Figure, punctuation and thin spaces after the number that line its decimal point up with the column (see alignTable). */
-  pad?: string;
-}
+// The rules that need no decimal arithmetic live in plainFormat.ts, shared with the page scripts.
+export { FIGURE_SPACE, MINUS, THIN_SPACE, formatM, formatQuantum, groupDigits, partsText, type NumberParts } from "./plainFormat.js";
+const group = groupDigits;
 
 /**
  * Significant-digit rounding and grouping, as parts.
@@ -64,7 +27,8 @@ export function numberParts(x: Dec, sig = 9): NumberParts {
     const [mant, ex] = a.toExponential(sig - 1).split("e");
     const [i, f] = mant!.split(".");
     const exp = "×10" + [...String(Number(ex))].map((ch) => SUPERSCRIPT[ch] ?? ch).join("");
-    return { sign, int: i!, frac: f ? "." + group(f.replace(/0+$/, ""), true) : "", exp };
+    const digits = (f ?? "").replace(/0+$/, "");
+    return { sign, int: i!, frac: digits ? "." + group(digits, true) : "", exp };
   }
   const text = a.toFixed(Math.max(0, sig - 1 - e));
   const [i, f] = text.split(".");
@@ -89,16 +53,6 @@ export function formatSigned(x: Dec | null, sig = 9): string {
 export function formatFraction(r: Rational | null): string {
   if (r === null) return "—";
   return r.toString().replace(/^-/, MINUS);
-}
-
-/** A doubled quantum number for display: "3/2", "−1/2". */
-export function formatQuantum(k: number): string {
-  return formatDoubled(k).replace(/^-/, MINUS);
-}
-
-/** A doubled m with explicit sign for non-zero values: "+3/2", "−1/2", "0". */
-export function formatM(k: number): string {
-  return k > 0 ? "+" + formatDoubled(k) : formatQuantum(k);
 }
 
 const WRITTEN = /^([+-]?)(\d*)(?:\.(\d*))?(?:\((\d+)\))?(?:[eE]([+-]?\d+))?$/;
@@ -142,12 +96,65 @@ export function writtenDigits(text: string): number {
   return Math.max(1, digits.length);
 }
 
-/** One display string of number parts (without padding). */
-export function partsText(p: NumberParts): string {
-  return p.sign + p.int + p.frac + (p.unc ?? "") + p.exp;
+/**
+ * The label of a component's polarization as shown in tables and search:
+ * σ+, π, σ−, and for the |Δm| = 2 components of a quadrupole line, which
+ * are neither π nor σ, "Δm = +2" or "Δm = −2" (q = m_upper − m_lower; "Δm = ±2" when q is not given).
+ */
+export function polarizationSymbol(p: "sigma+" | "pi" | "sigma-" | null, q?: number): string {
+  if (p === "sigma+") return "σ+";
+  if (p === "sigma-") return "σ−";
+  if (p === "pi") return "π";
+  return q === undefined ? "Δm = ±2" : `Δm = ${q > 0 ? "+" : MINUS}${Math.abs(q)}`;
 }
 
-/** The symbol of a polarization as shown in tables: σ+, π, σ−, or — for |Δm| = 2. */
-export function polarizationSymbol(p: "sigma+" | "pi" | "sigma-" | null): string {
-  return p === "sigma+" ? "σ+" : p === "sigma-" ? "σ−" : p === "pi" ? "π" : "—";
+const SUBSCRIPT: Record<string, string> = { "0": "₀", "1": "₁", "2": "₂", "3": "₃", "4": "₄", "5": "₅", "6": "₆", "7": "₇", "8": "₈", "9": "₉", "/": "/" };
+
+/** A term symbol typeset in plain text for captions and titles: ²P°₃/₂ (the data file may write 2Po3/2). */
+export function termText(t: { multiplicity: number; letter: string; parity: "odd" | null; J2: number }): string {
+  const sup = [...String(t.multiplicity)].map((ch) => SUPERSCRIPT[ch] ?? ch).join("");
+  const j = [...formatDoubled(t.J2)].map((ch) => SUBSCRIPT[ch] ?? ch).join("");
+  return `${sup}${t.letter}${t.parity === "odd" ? "°" : ""}${j}`;
+}
+
+const MONTHS = ["January", "February", "March", "April", "May", "June", "July", "August", "September", "October", "November", "December"];
+
+/** An ISO date-time as people read it, in UTC: "2 December 2026, 03:23 UTC". */
+export function readableDate(iso: string): string {
+  const d = new Date(iso);
+  if (Number.isNaN(d.getTime())) return iso;
+  const hh = String(d.getUTCHours()).padStart(2, "0");
+  const mm = String(d.getUTCMinutes()).padStart(2, "0");
+  return `${d.getUTCDate()} ${MONTHS[d.getUTCMonth()]} ${d.getUTCFullYear()}, ${hh}:${mm} UTC`;
+}
+
+/**
+ * A unit in the site's one typographic style: a single reciprocal unit after
+ * a slash, powers as superscripts ("Hz T^-1" → "Hz/T", "m^-1 T^-1" → "m⁻¹/T",
+ * "m s^-1" → "m/s", "J Hz^-1" → "J/Hz"); "1" (dimensionless) → "".
+ */
+export function unitText(unit: string): string {
+  if (unit.trim() === "1") return "";
+  const parts = unit.trim().split(/\s+/);
+  const power = (p: string) => p.replace(/\^(-?\d+)/, (_all, e: string) => [...e].map((ch) => SUPERSCRIPT[ch] ?? ch).join(""));
+  const last = parts[parts.length - 1]!;
+  if (parts.length > 1 && /\^-1$/.test(last)) return `${parts.slice(0, -1).map(power).join(" ")}/${last.replace(/\^-1$/, "")}`;
+  return parts.map(power).join(" ");
+}
+
+/**
+ * A value and its standard uncertainty in the concise form used on every
+ * page: the uncertainty in units of the value's last digit, in parentheses
+ * ("13996244917.1", "4.4" → "13996244917.1(44)"); the "± u" form when the
+ * uncertainty does not end on the value's last digit. An exact value (u null) stands alone.
+ */
+export function conciseText(value: string, uncertainty: string | null): string {
+  if (uncertainty === null) return value;
+  const m = /^([+-]?\d*)(?:\.(\d*))?(?:[eE]([+-]?\d+))?$/.exec(value.trim());
+  if (!m) return `${value} ± ${uncertainty}`;
+  const decimals = (m[2] ?? "").length - (m[3] ? Number(m[3]) : 0);
+  const scaled = new Dec(uncertainty).mul(new Dec(10).pow(decimals));
+  if (!scaled.isInteger() || scaled.isZero()) return `${value} ± ${uncertainty}`;
+  const mant = m[3] ? value.trim().slice(0, value.trim().search(/[eE]/)) : value.trim();
+  return `${mant}(${scaled.toFixed(0)})${m[3] ? `e${m[3]}` : ""}`;
 }

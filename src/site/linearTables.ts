@@ -8,9 +8,10 @@ import { Dec, exportText } from "../physics/decimal.js";
 import { hzPerTeslaToGHzPerTesla, hzPerTeslaToMHzPerGauss, hzPerTeslaToWavenumberPerTesla } from "../physics/zeeman.js";
 import { formatDoubled } from "../physics/quantum.js";
 import type { Quantity } from "../data/model.js";
+import { pageSlug } from "../data/ids.js";
 import type { HyperfineLevelResult, LevelResult, LineResult, SpeciesResult } from "../results/types.js";
 import { componentAnchor, hyperfineAnchor, levelAnchor, levelShiftsAnchor, lineAnchor, mFAnchor, mJAnchor } from "./anchors.js";
-import { formatQuantum, polarizationSymbol, writtenDigits } from "./format.js";
+import { formatQuantum, polarizationSymbol, termText, writtenDigits } from "./format.js";
 import { levelPagePath, linePagePath } from "./pageUrls.js";
 import { fractionCell, measuredCell, numberCell, quantumCell, termCell, textCell, type Cell, type Table } from "./table.js";
 import { makeTable, type ColumnSpec } from "./tableSpec.js";
@@ -25,6 +26,15 @@ export interface TableHome {
   speciesId: string;
   csvBase: string;
   exportUrl: string;
+}
+
+/**
+ * The CSV file of a table, named so a reader knows it in a downloads folder:
+ * species id, then the level or line id as a page name (pageSlug: "/" → "_"),
+ * then what the table holds; "rb87-5p-P3_2-field-energies.csv".
+ */
+export function csvName(home: TableHome, ...parts: string[]): string {
+  return `${home.csvBase}/${[home.speciesId, ...parts.map(pageSlug)].join("-")}.csv`;
 }
 
 /** The three shift columns (MHz/G switchable by the reader, GHz/T, cm⁻¹/T) of a row's shift in Hz/T. */
@@ -64,7 +74,7 @@ export function levelsTable(s: SpeciesResult, home: TableHome, hasPage: (l: Leve
     {
       id: "levels",
       caption: "Levels",
-      csvPath: `${home.csvBase}/levels.csv`,
+      csvPath: csvName(home, "levels"),
       exportUrl: home.exportUrl,
       anchor: (l) => levelAnchor(l.input.id),
       columns: [
@@ -80,7 +90,7 @@ export function levelsTable(s: SpeciesResult, home: TableHome, hasPage: (l: Leve
         { key: "gJ_from", label: "gJ from", kind: "text", cell: (l) => textCell(l.gJFrom === "measured" ? "measured" : l.gJFrom === "LS" ? "LS, gL and gS" : "J = 0") },
         { key: "A", label: "A", unit: "MHz", kind: "number", cell: (l) => quantityCell(l.input.hyperfine?.A, "MHz", "1e6") },
         { key: "B", label: "B", unit: "MHz", kind: "number", cell: (l) => quantityCell(l.input.hyperfine?.B, "MHz", "1e6") },
-        { key: "source", label: "source", kind: "text", cell: (l) => textCell(l.input.source) },
+        { key: "source", label: "source", kind: "note", cell: (l) => textCell(l.input.source) },
       ],
     },
     s.levels,
@@ -88,13 +98,13 @@ export function levelsTable(s: SpeciesResult, home: TableHome, hasPage: (l: Leve
 }
 
 /** The linear shift of every mJ of a level. */
-export function mJTable(l: LevelResult, home: TableHome, base: string): Table {
+export function mJTable(l: LevelResult, home: TableHome): Table {
   const lid = l.input.id;
   return makeTable(
     {
       id: `mj:${lid}`,
-      caption: `${l.input.term.text} (${lid}): sublevels mJ, linear shift`,
-      csvPath: `${base}-mJ.csv`,
+      caption: `${lid} ${termText(l.input.term)}: sublevels mJ, linear shift`,
+      csvPath: csvName(home, lid, "mJ-shifts"),
       exportUrl: home.exportUrl,
       anchor: (m) => mJAnchor(lid, m.m2),
       columns: [
@@ -108,13 +118,13 @@ export function mJTable(l: LevelResult, home: TableHome, base: string): Table {
 }
 
 /** The hyperfine levels F of a level: gF and zero-field position. */
-export function hyperfineTable(l: LevelResult, home: TableHome, base: string): Table {
+export function hyperfineTable(l: LevelResult, home: TableHome): Table {
   const lid = l.input.id;
   return makeTable<HyperfineLevelResult>(
     {
       id: `hf:${lid}`,
-      caption: `${l.input.term.text} (${lid}): hyperfine levels F`,
-      csvPath: `${base}-F.csv`,
+      caption: `${lid} ${termText(l.input.term)}: hyperfine levels F`,
+      csvPath: csvName(home, lid, "hyperfine-levels"),
       exportUrl: home.exportUrl,
       anchor: (h) => hyperfineAnchor(lid, h.F2),
       columns: [
@@ -128,14 +138,14 @@ export function hyperfineTable(l: LevelResult, home: TableHome, base: string): T
 }
 
 /** Every sublevel (F, mF) of a level with its linear shift. */
-export function hyperfineSublevelsTable(l: LevelResult, home: TableHome, base: string): Table {
+export function hyperfineSublevelsTable(l: LevelResult, home: TableHome): Table {
   const lid = l.input.id;
   const rows = l.hyperfine.flatMap((h) => h.sublevels.map((m) => ({ h, m })));
   return makeTable<(typeof rows)[number]>(
     {
       id: `mf:${lid}`,
-      caption: `${l.input.term.text} (${lid}): sublevels (F, mF), linear shift`,
-      csvPath: `${base}-mF.csv`,
+      caption: `${lid} ${termText(l.input.term)}: sublevels (F, mF), linear shift`,
+      csvPath: csvName(home, lid, "mF-shifts"),
       exportUrl: home.exportUrl,
       anchor: ({ h, m }) => mFAnchor(lid, h.F2, m.m2),
       columns: [
@@ -167,7 +177,7 @@ export function glanceTable(s: SpeciesResult, home: TableHome, muB_h: Dec): Tabl
     {
       id: "glance",
       caption: "At a glance: g factors and linear shift per unit m",
-      csvPath: `${home.csvBase}/glance.csv`,
+      csvPath: csvName(home, "at-a-glance"),
       exportUrl: home.exportUrl,
       anchor: (r) => `glance:${r.hf ? hyperfineAnchor(r.level.input.id, r.hf.F2) : levelAnchor(r.level.input.id)}`,
       columns: [
@@ -197,7 +207,7 @@ export function linesTable(s: SpeciesResult, home: TableHome): Table {
     {
       id: "lines",
       caption: "Lines",
-      csvPath: `${home.csvBase}/lines.csv`,
+      csvPath: csvName(home, "lines"),
       exportUrl: home.exportUrl,
       anchor: (ln) => lineAnchor(ln.input.id),
       columns: [
@@ -208,7 +218,7 @@ export function linesTable(s: SpeciesResult, home: TableHome): Table {
         { key: "wavelength", label: "λ (vacuum)", unit: "nm", kind: "number", cell: (ln) => quantityCell(ln.input.wavelength, "nm", "1e-9") },
         { key: "g_eff", label: "g_eff", kind: "number", cell: (ln) => numberCell(ln.gEff, SHOWN_DIGITS) },
         { key: "pattern", label: "pattern", kind: "text", cell: (ln) => textCell(ln.pattern ?? "—") },
-        { key: "summary", label: "reading", kind: "text", cell: (ln) => textCell(ln.summary) },
+        { key: "summary", label: "reading", kind: "note", cell: (ln) => textCell(ln.summary) },
       ],
     },
     s.lines,
@@ -221,15 +231,15 @@ export function componentsTable(ln: LineResult, home: TableHome): Table {
   return makeTable<(typeof ln.components)[number]>(
     {
       id: `cmp:${id}`,
-      caption: `${id} (${ln.upper.input.term.text} → ${ln.lower.input.term.text}): Zeeman components`,
-      csvPath: `${home.csvBase}/line-${safeFile(id)}.csv`,
+      caption: `${id} (${termText(ln.upper.input.term)} → ${termText(ln.lower.input.term)}): Zeeman components`,
+      csvPath: csvName(home, id, "components"),
       exportUrl: home.exportUrl,
       anchor: (c) => componentAnchor(id, c.mu2, c.ml2),
       columns: [
         { key: "mu", label: "m upper", kind: "quantum", cell: (c) => quantumCell(c.mu2, true) },
         { key: "ml", label: "m lower", kind: "quantum", cell: (c) => quantumCell(c.ml2, true) },
         { key: "dm", label: "Δm", kind: "quantum", cell: (c) => quantumCell(c.deltaM * 2, true) },
-        { key: "pol", label: "polarization", kind: "text", cell: (c) => textCell(polarizationSymbol(c.polarization)) },
+        { key: "pol", label: "polarization", kind: "text", cell: (c) => textCell(polarizationSymbol(c.polarization, c.deltaM)) },
         { key: "strength", label: "strength", kind: "fraction", cell: (c) => fractionCell(c.strength) },
         { key: "lorentz_exact", label: "shift, LS exact", unit: "Lorentz units", kind: "fraction", cell: (c) => fractionCell(c.shiftLorentzExact) },
         { key: "lorentz", label: "shift", unit: "Lorentz units", kind: "number", cell: (c) => numberCell(c.shiftLorentz, SHOWN_DIGITS) },

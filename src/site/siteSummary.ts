@@ -6,6 +6,7 @@
 import type { ConstantsEdition } from "../physics/constants/constant.js";
 import { listConstants } from "../physics/constants/constant.js";
 import { bohrRule, fieldRules, sheetAddress, type SpeciesSheet } from "./sheet.js";
+import { conciseText, partsText, unitText, writtenParts } from "./format.js";
 import { textCell, type Table } from "./table.js";
 import { makeTable } from "./tableSpec.js";
 
@@ -47,10 +48,17 @@ export function constantsTable(constants: ConstantsEdition): Table {
       columns: [
         { key: "symbol", label: "symbol", kind: "text", cell: (c) => textCell(c.symbol) },
         { key: "name", label: "quantity", kind: "text", cell: (c) => textCell(c.name) },
-        { key: "value", label: "value", kind: "text", cell: (c) => textCell(c.value) },
-        { key: "u", label: "standard uncertainty", kind: "text", cell: (c) => textCell(c.exact ? "exact" : c.uncertainty) },
-        { key: "unit", label: "unit", kind: "text", cell: (c) => textCell(c.unit) },
-        { key: "reference", label: "reference", kind: "text", cell: (c) => textCell(c.reference) },
+        {
+          key: "value", label: "value (standard uncertainty)", kind: "number",
+          cell: (c) => {
+            const text = conciseText(c.value, c.exact ? null : c.uncertainty);
+            const parts = writtenParts(text);
+            return parts ? { text: partsText(parts), sort: c.value, parts } : textCell(text);
+          },
+        },
+        { key: "exact", label: "exact", kind: "text", cell: (c) => textCell(c.exact ? "exact (SI)" : "") },
+        { key: "unit", label: "unit", kind: "text", cell: (c) => textCell(unitText(c.unit)) },
+        { key: "reference", label: "reference", kind: "note", cell: (c) => textCell(c.reference) },
       ],
     },
     listConstants(constants),

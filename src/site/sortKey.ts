@@ -6,6 +6,7 @@
  * keys are cut to SORT_DIGITS significant digits in the page; the CSV and
  * the JSON export keep the full `sort` of the cell.
  */
+import { NOTE_FOLD, noteSummary } from "./note.js";
 import { dec, exportText } from "../physics/decimal.js";
 import type { Cell, ColumnKind } from "./table.js";
 
@@ -18,6 +19,7 @@ export const SORT_DIGITS = 17;
 
 /** The cell's text as the reader's browser has it (textContent of the macro's markup). */
 export function shownText(c: Cell, kind: ColumnKind): string {
+  if (kind === "note" && c.text.length > NOTE_FOLD) return noteSummary(c.text) + c.text;
   if (kind === "term" && c.term) return c.term.multiplicity + c.term.letter + (c.term.parity ? "o" : "") + c.term.J;
   if (c.href) return c.text;
   if (c.parts) {

@@ -194,19 +194,18 @@ export function overviewView(v: SpeciesViewsInput): OverviewView {
       lineId: ln.input.id,
       url: `/${linePagePath(id, ln.input.id)}`,
       pattern: ln.pattern ?? "—",
-      gEff: formatNumber(ln.gEff, SHOWN_DIGITS),
+      gEff: ln.gEff === null ? `— (${ln.gEffNote ?? "not defined"})` : formatNumber(ln.gEff, SHOWN_DIGITS),
       summary: ln.summary,
       sketch: patternSketchSvg(`sketch-${safeFile(ln.input.id)}`, ln.input.id, ln.components.map((c) => ({ lorentz: c.shiftLorentz, strength: c.strength.toDecimal(), polarization: c.polarization }))),
     })),
     levels: levelsTable(s, home, (l) => hasLevelPage(v.fields, l)),
     shiftSections: s.levels.map((l) => {
-      const base = `${home.csvBase}/level-${safeFile(l.input.id)}`;
       return {
         anchor: levelShiftsAnchor(l.input.id),
         termParts: termParts(l.input.term),
         title: l.input.id,
         levelUrl: levelUrl(l),
-        tables: [mJTable(l, home, base), ...(l.hyperfine.length > 0 ? [hyperfineTable(l, home, base), hyperfineSublevelsTable(l, home, base)] : [])],
+        tables: [mJTable(l, home), ...(l.hyperfine.length > 0 ? [hyperfineTable(l, home), hyperfineSublevelsTable(l, home)] : [])],
       };
     }),
     lines: linesTable(s, home),

@@ -7,12 +7,13 @@ import type { Dec } from "../physics/decimal.js";
 import { exportText } from "../physics/decimal.js";
 import type { Rational } from "../physics/rational.js";
 import type { Measured } from "../data/model.js";
-import { FIGURE_SPACE, THIN_SPACE, formatFraction, formatM, formatQuantum, groupDigits, numberParts, partsText, writtenParts, type NumberParts } from "./format.js";
+import { formatFraction, formatM, formatQuantum, numberParts, partsText, writtenParts } from "./format.js";
+import { alignParts, type NumberParts } from "./plainFormat.js";
 
-/** U+2008, as wide as the decimal point: pads a number that has none. */
-export const PUNCTUATION_SPACE = "\u2008";
+export { PUNCTUATION_SPACE } from "./plainFormat.js";
 
-export type ColumnKind = "text" | "number" | "term" | "quantum" | "fraction";
+/** "note": long text (sources, readings) shown folded in an expandable note, so a row stays low on a phone. */
+export type ColumnKind = "text" | "note" | "number" | "term" | "quantum" | "fraction";
 
 export interface Column {
   key: string;
@@ -137,31 +138,12 @@ export const termCell = (t: { text: string; multiplicity: number; letter: string
   term: termParts(t),
 });
 
-const DIGIT = /[0-9]/;
-
-/** How wide the part right of the decimal point is, counted per kind of character. */
-function rightWidth(p: NumberParts): { fig: number; punct: number; thin: number } {
-  let fig = 0;
-  let punct = 0;
-  let thin = 0;
-  for (const ch of p.frac + (p.unc ?? "") + p.exp) {
-    if (DIGIT.test(ch)) fig++;
-    else if (ch === THIN_SPACE) thin++;
-    else if (ch === " ") thin++; // around "±"; drawn as thin spaces in padding
-    else if (ch === "×" || ch === "±") fig++;
-    else punct++; // point, parentheses, superscripts: about the width of a point
-  }
-  return { fig, punct, thin };
-}
-
 /**
  * Lines up the decimal points of every number and fraction column of a
- * table: each right-aligned cell gets trailing figure spaces (digit width),
- * punctuation spaces (point width) and thin spaces so that every cell has
- * the same number of each to the right of its point. Digit groups are made
- * uniform per column first: when any number of a column has five or more
- * digits on one side of the point, four-digit runs on that side are grouped
- * too. Returns a new table; `text` of each cell follows the regrouping.
+ * table (alignParts in plainFormat.ts, the rule the page scripts use too):
+ * digit groups made uniform per column, then trailing figure, punctuation
+ * and thin spaces so every cell has as many of each right of its point.
+ * Returns a new table; `text` of each cell follows the regrouping.
  */
 export function alignTable(t: Table): Table {
   const rows = t.rows.map((r) => ({ ...r, cells: r.cells.map((c) => ({ ...c })) }));
@@ -169,27 +151,12 @@ export function alignTable(t: Table): Table {
     if (col.kind !== "number" && col.kind !== "fraction") return;
     const cells = rows.map((r) => r.cells[i]).filter((c): c is Cell => c?.parts !== undefined);
     if (cells.length === 0) return;
-    const raw = (s: string) => s.replace(new RegExp(THIN_SPACE, "g"), "");
-    const forceInt = cells.some((c) => raw(c.parts!.int).length > 4);
-    const forceFrac = cells.some((c) => raw(c.parts!.frac).length - 1 > 4);
-    for (const c of cells) {
-      const p = c.parts!;
-      const before = partsText(p);
-      const frac = p.frac ? "." + groupDigits(raw(p.frac).slice(1), true, forceFrac) : "";
-      c.parts = { ...p, int: groupDigits(raw(p.int), false, forceInt), frac };
-      const after = partsText(c.parts);
-      if (after !== before) c.text = c.text.replace(before, after);
-    }
-    const widths = cells.map((c) => rightWidth(c.parts!));
-    const max = {
-      fig: Math.max(...widths.map((w) => w.fig)),
-      punct: Math.max(...widths.map((w) => w.punct)),
-      thin: Math.max(...widths.map((w) => w.thin)),
-    };
+    const aligned = alignParts(cells.map((c) => c.parts!));
     cells.forEach((c, k) => {
-      const w = widths[k]!;
-      const pad = FIGURE_SPACE.repeat(max.fig - w.fig) + PUNCTUATION_SPACE.repeat(max.punct - w.punct) + THIN_SPACE.repeat(max.thin - w.thin);
-      c.parts = { ...c.parts!, pad };
+      const before = partsText(c.parts!);
+      const after = partsText(aligned[k]!);
+      if (after !== before) c.text = c.text.replace(before, after);
+      c.parts = aligned[k]!;
     });
   });
   return { ...t, rows };

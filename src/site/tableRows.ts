@@ -5,6 +5,7 @@
  * macro call per cell was most of the render time; the markup is the same
  * the macro wrote, byte for byte, escaped the way Nunjucks autoescaping does.
  */
+import { NOTE_FOLD, noteSummary } from "./note.js";
 import { sortKey } from "./sortKey.js";
 import type { Cell, Column, Table, TermParts } from "./table.js";
 
@@ -21,8 +22,9 @@ export function termHtml(t: TermParts): string {
   return `<span class="term"><sup>${e(t.multiplicity)}</sup>${e(t.letter)}${t.parity ? "<sup>o</sup>" : ""}<sub>${e(t.J)}</sub></span>`;
 }
 
-/** The content of one cell: a term symbol, an in-site link, a number split for alignment, or text. */
+/** The content of one cell: a term symbol, an in-site link, a number split for alignment, a folded note, or text. */
 export function cellHtml(c: Cell, col: Column): string {
+  if (col.kind === "note" && c.text.length > NOTE_FOLD) return `<details class="note"><summary>${e(noteSummary(c.text))}</summary>${e(c.text)}</details>`;
   if (col.kind === "term" && c.term) return termHtml(c.term);
   if (c.href) return `<a href="${e(c.href)}">${e(c.text)}</a>`;
   if (c.parts) {

@@ -3,7 +3,7 @@
  * (label, unit, kind) and how to make its cell from a row; the table says
  * its id, caption, CSV path and how a row's anchor is made. Everything
  * every table needs (decimal-point alignment, the export link, dropping
- * columns that do not apply) is done here once, so a page builder lists
+ * columns that do not apply, the numerical-zero rule) is done here once, so a page builder lists
  * columns and nothing else.
  *
  *   const t = makeTable({
@@ -15,7 +15,37 @@
  *     ],
  *   }, sublevels);
  */
-import { alignTable, type Cell, type Column, type Row, type Table } from "./table.js";
+import { Dec } from "../physics/decimal.js";
+import { alignTable, numberCell, type Cell, type Column, type Row, type Table } from "./table.js";
+
+/**
+ * The numerical-zero rule. Decimals carry 60 significant digits, and the
+ * eigenvalue and root iterations stop within about 1e-50 of the largest
+ * magnitude they handle; a computed value below NUMERICAL_ZERO times the
+ * largest magnitude in its own column is therefore indistinguishable from 0
+ * and is shown as 0 (the export keeps the digits as computed). Measured
+ * inputs and exact fractions never come near this ratio.
+ */
+export const NUMERICAL_ZERO = new Dec("1e-40");
+
+function zeroNoise(rows: Row[], columns: Column[]): void {
+  columns.forEach((col, i) => {
+    if (col.kind !== "number") return;
+    let scale = new Dec(0);
+    for (const r of rows) {
+      const c = r.cells[i]!;
+      if (c.parts && c.sort) scale = Dec.max(scale, new Dec(c.sort).abs());
+    }
+    if (scale.isZero()) return;
+    const below = scale.mul(NUMERICAL_ZERO);
+    for (const r of rows) {
+      const c = r.cells[i]!;
+      if (!c.parts || !c.sort) continue;
+      const v = new Dec(c.sort);
+      if (!v.isZero() && v.abs().lt(below)) r.cells[i] = numberCell(new Dec(0), 1, c.hzPerT === undefined ? {} : { hzPerT: "0" });
+    }
+  });
+}
 
 export interface ColumnSpec<R> extends Column {
   cell: (row: R, index: number) => Cell;
@@ -38,6 +68,7 @@ export function makeTable<R>(spec: TableSpec<R>, rows: readonly R[]): Table {
   const specs = spec.columns.filter((c) => c.when !== false);
   const columns: Column[] = specs.map(({ cell: _cell, when: _when, ...col }) => col);
   const out: Row[] = rows.map((r, i) => ({ anchor: spec.anchor(r, i), cells: specs.map((c) => c.cell(r, i)) }));
+  zeroNoise(out, columns);
   return alignTable({
     id: spec.id,
     caption: spec.caption,

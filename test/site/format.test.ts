@@ -101,3 +101,14 @@ describe("build date", () => {
     expect(buildDateFrom({ SOURCE_DATE_EPOCH: "soon" }, () => new Date("2026-05-04T03:02:01Z"))).toBe("2026-05-04T03:02:01.000Z");
   });
 });
+
+describe("numerical zeros in tables", () => {
+  it("shows a computed value below 1e-40 of its column's largest magnitude as 0, and keeps the others", async () => {
+    const { makeTable } = await import("../../src/site/tableSpec.js");
+    const { numberCell: cell } = await import("../../src/site/table.js");
+    // Values as the 60-digit solvers leave them: a zero-field shift of 1e-51 MHz beside shifts of order 1e3 MHz
+    // (the 40-digit margin is the documented rule, src/site/tableSpec.ts).
+    const t = makeTable({ id: "t", caption: "t", csvPath: "", anchor: (_r: string, i) => `r${i}`, columns: [{ key: "x", label: "x", kind: "number", cell: (r: string) => cell(dec(r), 9) }] }, ["1e-51", "-2563.005979", "1e-30", "0"]);
+    expect(t.rows.map((r) => r.cells[0]!.text.replace(/[\u2007\u2008\u2009]/g, ""))).toEqual(["0", "−2563.00598", "1×10⁻³⁰", "0"]);
+  });
+});
