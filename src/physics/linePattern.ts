@@ -100,10 +100,15 @@ export function lineComponents(upper: PatternLevel, lower: PatternLevel, k: numb
   return out;
 }
 
+/** Why a quadrupole line has no g_eff (shown where the number would be). */
+export const QUADRUPOLE_G_EFF_NOTE =
+  "not defined for a quadrupole (E2) line: g_eff is the first moment of the σ components of a dipole line, and an E2 line also has Δm = ±2 components";
+
 /**
  * Effective Landé factor of a line (the first moment of its σ components):
  * g_eff = (gu + gl)/2 + (gu − gl)[Ju(Ju+1) − Jl(Jl+1)]/4; a J = 0 level
- * contributes g = 0. Exact: no when g values are measured.
+ * contributes g = 0. Defined for dipole lines (E1, M1) only: callers give
+ * null for E2 lines (QUADRUPOLE_G_EFF_NOTE). Exact: no when g values are measured.
  * Reference: del Toro Iniesta (2003), eq. 3.44.
  *
  * Worked example: Fe I 525.02 nm (upper z 7D°1, g = 3; lower a 5D0) gives 3;
@@ -130,52 +135,79 @@ function lcm(a: bigint, b: bigint): bigint {
  * distinct non-negative Lorentz-unit shifts of the π components in
  * parentheses, then those of the σ components, all as numerators over their
  * least common denominator d. Several π shifts share one pair of parentheses.
- * Uses the exact LS shifts. Components with |Δm| = 2 (E2 only) are not part
- * of the notation, which is defined for dipole lines: E2 lines get null.
- * Exact: yes.
+ * Uses the exact LS shifts. Exact: yes.
+ *
+ * Quadrupole (E2, k = 2) lines use the same notation with both non-π
+ * groups after the parentheses, the |Δm| = 1 shifts first and, after a
+ * semicolon, the |Δm| = 2 shifts: "(π) Δm = ±1; Δm = ±2 / d". An empty
+ * group is written "none".
  *
  * Worked examples (Condon and Shortley, ch. XVI; White, "Introduction to
  * Atomic Spectra" (1934), ch. X): Na D1 "(2) 4 / 3"; Na D2 "(1) 3, 5 / 3";
  * a normal triplet "(0) 1 / 1"; Hg 546.1 nm (3S1 → 3P2) "(0, 1) 2, 3, 4 / 2".
+ * E2, by hand from the LS g values: 40Ca+ 729 nm (3d ²D5/2 → 4s ²S1/2,
+ * g = 6/5 and 2) "(2) 4, 8; 10, 14 / 5"; [O I] 557.7 nm (¹S0 → ¹D2, g = 1)
+ * "(0) 1; 2 / 1".
  */
 export function patternNotation(components: PatternComponent[], k: number): string | null {
-  if (k !== 1) return null;
-  const distinct = (pol: (c: PatternComponent) => boolean): Rational[] => {
+  if (k !== 1 && k !== 2) return null;
+  const distinct = (dm: number): Rational[] => {
     const seen = new Map<string, Rational>();
     for (const c of components) {
-      if (!pol(c)) continue;
+      if (Math.abs(c.deltaM) !== dm) continue;
       const a = c.shiftLorentzExact.abs();
       seen.set(a.toString(), a);
     }
     return [...seen.values()].sort((a, b) => a.cmp(b));
   };
-  const pi = distinct((c) => c.deltaM === 0);
-  const sigma = distinct((c) => Math.abs(c.deltaM) === 1);
+  const pi = distinct(0);
+  const sigma = distinct(1);
+  const quad = k === 2 ? distinct(2) : [];
   let d = 1n;
-  for (const r of [...pi, ...sigma]) d = lcm(d, r.den);
-  const nums = (rs: Rational[]) => rs.map((r) => ((r.num * d) / r.den).toString()).join(", ");
-  return `(${nums(pi)}) ${nums(sigma)} / ${d}`;
+  for (const r of [...pi, ...sigma, ...quad]) d = lcm(d, r.den);
+  const nums = (rs: Rational[]) => (rs.length === 0 ? "none" : rs.map((r) => ((r.num * d) / r.den).toString()).join(", "));
+  if (k === 1) return `(${nums(pi)}) ${nums(sigma)} / ${d}`;
+  return `(${nums(pi)}) ${nums(sigma)}; ${nums(quad)} / ${d}`;
 }
 
 /**
- * One-line reading of a pattern: "no splitting", "normal triplet" (π at 0,
- * σ at ±1 Lorentz unit), "triplet, σ at ±g" (π at 0, one σ shift g ≠ 1), or
- * "anomalous: n π and m σ components" (counting components of non-zero
- * strength; for E2 lines also the |Δm| = 2 components). Uses exact LS shifts.
+ * One-line reading of a pattern, from the exact LS shifts.
+ * Dipole lines (k = 1): "no splitting", "normal triplet" (π at 0, σ at ±1
+ * Lorentz unit), "triplet, σ at ±g" (π at 0, one σ shift g ≠ 1), or
+ * "anomalous: n π and m σ components".
+ * Quadrupole lines (k = 2), in their own words: "no splitting";
+ * "normal quadrupole quintuplet" when Δm = 0, ±1, ±2 fall at 0, ±1, ±2
+ * Lorentz units (both g = 1, or a J = 0 level with g = 1 on the other);
+ * "quadrupole quintuplet, spacing s Lorentz units" for 0, ±s, ±2s; else
+ * "quadrupole pattern: n components with Δm = 0, m with Δm = ±1, p with
+ * Δm = ±2, spread over ±x Lorentz units" (counting components of non-zero
+ * strength, x the largest shift).
+ *
+ * Worked examples: a singlet dipole line 1P1 → 1S0 is a "normal triplet";
+ * [O I] 557.7 nm (¹S0 → ¹D2, E2) is a "normal quadrupole quintuplet".
  */
-export function patternSummary(components: PatternComponent[]): string {
+export function patternSummary(components: PatternComponent[], k = 1): string {
   if (components.every((c) => c.shiftLorentzExact.isZero())) return "no splitting";
-  const piShifts = new Set(components.filter((c) => c.deltaM === 0).map((c) => c.shiftLorentzExact.abs().toString()));
-  const sigmaShifts = new Set(
-    components.filter((c) => Math.abs(c.deltaM) === 1).map((c) => c.shiftLorentzExact.abs().toString()),
-  );
-  const quad = components.filter((c) => Math.abs(c.deltaM) === 2).length;
-  if (quad === 0 && piShifts.size === 1 && piShifts.has("0") && sigmaShifts.size === 1) {
+  const shifts = (dm: number) => new Set(components.filter((c) => Math.abs(c.deltaM) === dm).map((c) => c.shiftLorentzExact.abs().toString()));
+  const count = (dm: number) => components.filter((c) => Math.abs(c.deltaM) === dm).length;
+  const piShifts = shifts(0);
+  const sigmaShifts = shifts(1);
+  if (k === 2) {
+    const quadShifts = shifts(2);
+    if (piShifts.size === 1 && piShifts.has("0") && sigmaShifts.size === 1 && quadShifts.size === 1) {
+      const s = components.find((c) => Math.abs(c.deltaM) === 1)!.shiftLorentzExact.abs();
+      const q = components.find((c) => Math.abs(c.deltaM) === 2)!.shiftLorentzExact.abs();
+      if (q.cmp(s.mul(Rational.of(2))) === 0) {
+        return s.cmp(Rational.ONE) === 0 ? "normal quadrupole quintuplet" : `quadrupole quintuplet, spacing ${s.toString()} Lorentz units`;
+      }
+    }
+    let widest = Rational.ZERO;
+    for (const c of components) if (c.shiftLorentzExact.abs().cmp(widest) > 0) widest = c.shiftLorentzExact.abs();
+    return `quadrupole pattern: ${count(0)} components with Δm = 0, ${count(1)} with Δm = ±1, ${count(2)} with Δm = ±2, spread over ±${widest.toString()} Lorentz units`;
+  }
+  if (piShifts.size === 1 && piShifts.has("0") && sigmaShifts.size === 1) {
     const s = [...sigmaShifts][0]!;
     return s === "1" ? "normal triplet" : `triplet, σ at ±${s} Lorentz units`;
   }
-  const nPi = components.filter((c) => c.deltaM === 0).length;
-  const nSigma = components.filter((c) => Math.abs(c.deltaM) === 1).length;
-  const extra = quad > 0 ? ` and ${quad} with |Δm| = 2` : "";
-  return `anomalous: ${nPi} π and ${nSigma} σ components${extra}`;
+  return `anomalous: ${count(0)} π and ${count(1)} σ components`;
 }

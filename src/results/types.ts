@@ -46,8 +46,11 @@ export interface LineResult {
   lower: LevelResult;
   /** Multipole rank. */
   k: number;
-  gEff: Dec;
-  /** Classical notation from exact LS g values; null for E2. */
+  /** Effective Landé factor; null for E2 lines (gEffNote says why). */
+  gEff: Dec | null;
+  /** Why gEff is null, for the pages; null when it is given. */
+  gEffNote: string | null;
+  /** Classical notation from exact LS g values (E2: the |Δm| = 1 and, after a semicolon, |Δm| = 2 shifts); null only for a rank other than 1 or 2. */
   pattern: string | null;
   summary: string;
   components: PatternComponent[];

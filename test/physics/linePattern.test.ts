@@ -92,8 +92,12 @@ describe("patternNotation", () => {
     expect(patternNotation(lineComponents(lsLevel(2, 0, 2), lsLevel(2, 1, 4), 1, MUB_H), 1)).toBe("(0, 1) 2, 3, 4 / 2");
   });
 
-  it("is null for quadrupole lines, where the classical notation is not defined", () => {
-    expect(patternNotation(lineComponents(lsLevel(1, 2, 5), S1_2, 2, MUB_H), 2)).toBeNull();
+  it("writes quadrupole lines with the |Δm| = 1 and then the |Δm| = 2 shifts after the π group (issue 10, defect 6)", () => {
+    // 40Ca+ 729 nm, 3d ²D5/2 → 4s ²S1/2 (E2), LS g = 6/5 and 2 (common practice). By hand, gu·mu − gl·ml:
+    // Δm = 0: ±2/5; Δm = ±1: ±4/5, ±8/5; Δm = ±2: ±2, ±14/5 → over 5: (2) 4, 8; 10, 14 / 5
+    expect(patternNotation(lineComponents(lsLevel(1, 2, 5), S1_2, 2, MUB_H), 2)).toBe("(2) 4, 8; 10, 14 / 5");
+    // [O I] 557.7 nm, ¹S0 → ¹D2 (E2), g(¹D2) = 1: shifts −ml for Δm = −ml, a quintuplet 0, ±1, ±2 (by hand)
+    expect(patternNotation(lineComponents(lsLevel(0, 0, 0), lsLevel(0, 2, 4), 2, MUB_H), 2)).toBe("(0) 1; 2 / 1");
   });
 });
 
@@ -106,6 +110,17 @@ describe("patternSummary", () => {
   it("calls Fe I 525.02 nm a triplet with σ at ±3", () => {
     // 7D1 → 5D0: pure Zeeman triplet with g_eff = 3 (Solanki 1993).
     expect(patternSummary(lineComponents(lsLevel(6, 2, 2), lsLevel(4, 2, 0), 1, MUB_H))).toBe("triplet, σ at ±3 Lorentz units");
+  });
+
+  it("describes quadrupole patterns in their own words (issue 10, defect 6)", () => {
+    // [O I] 557.7 nm: Δm = 0, ±1, ±2 at 0, ±1, ±2 Lorentz units (by hand, g(¹D2) = 1)
+    expect(patternSummary(lineComponents(lsLevel(0, 0, 0), lsLevel(0, 2, 4), 2, MUB_H), 2)).toBe("normal quadrupole quintuplet");
+    // 40Ca+ 729 nm: 2 + 4 + 4 components (ten in all, common practice), widest at ±14/5 (by hand, as above)
+    expect(patternSummary(lineComponents(lsLevel(1, 2, 5), S1_2, 2, MUB_H), 2)).toBe(
+      "quadrupole pattern: 2 components with Δm = 0, 4 with Δm = ±1, 4 with Δm = ±2, spread over ±14/5 Lorentz units",
+    );
+    // a J = 0 upper level over a ³P2 level (LS g = 3/2): a quintuplet with spacing 3/2 (by hand)
+    expect(patternSummary(lineComponents(lsLevel(0, 0, 0), lsLevel(2, 1, 4), 2, MUB_H), 2)).toBe("quadrupole quintuplet, spacing 3/2 Lorentz units");
   });
 
   it("says no splitting when every shift vanishes", () => {
