@@ -134,14 +134,7 @@ export function transitionsTable(l: LevelResult, f: LevelFieldResult, fields: Co
       columns: [
         { key: "lower", label: "lower (F, mF)", kind: "text", cell: (t) => textCell(stateText(t.lower.F2, t.lower.mF2)) },
         { key: "upper", label: "upper (F, mF)", kind: "text", cell: (t) => textCell(stateText(t.upper.F2, t.upper.mF2)) },
-        { key: "kind", label: "kind", kind: "text", cell: (t) => textCell(t.kind === "two-photon" ? "two-photon" : "magnetic dipole") },
         { key: "f0", label: "f at 0 G", unit: "MHz", kind: "number", cell: (t) => numberCell(t.zeroFieldHz.div(MHZ), 12) },
-        { key: "d1", label: "df/dB", unit: "kHz/G", kind: "number", cell: (t) => numberCell(t.firstOrder.hzPerGauss.div("1e3"), 9) },
-        { key: "d2", label: "d²f/dB² ÷ 2", unit: "Hz/G²", kind: "number", cell: (t) => numberCell(t.secondOrder ? t.secondOrder.hzPerGauss2 : null, 7) },
-        ...positive.map((b, i) => ({
-          key: `f${i}`, label: `f at ${b.text}`, unit: "MHz", kind: "number" as const,
-          cell: (t: SublevelTransition) => numberCell(t.atFields.filter((a) => a.tesla.gt(0))[i]!.hz.div(MHZ), 12),
-        })),
         {
           key: "insensitive", label: "field-insensitive at", kind: "text",
           cell: (t) =>
@@ -151,6 +144,13 @@ export function transitionsTable(l: LevelResult, f: LevelFieldResult, fields: Co
                 : t.fieldInsensitive.map((p) => `${fieldText(p.tesla, 7)} (${formatNumber(p.hz.div(MHZ), 12)} MHz)`).join("; "),
             ),
         },
+        { key: "kind", label: "kind", kind: "text", cell: (t) => textCell(t.kind === "two-photon" ? "2-photon" : "M1") },
+        { key: "d1", label: "df/dB", unit: "kHz/G", kind: "number", cell: (t) => numberCell(t.firstOrder.hzPerGauss.div("1e3"), 9) },
+        { key: "d2", label: "d²f/dB² ÷ 2", unit: "Hz/G²", kind: "number", cell: (t) => numberCell(t.secondOrder ? t.secondOrder.hzPerGauss2 : null, 7) },
+        ...positive.map((b, i) => ({
+          key: `f${i}`, label: `f at ${b.text}`, unit: "MHz", kind: "number" as const,
+          cell: (t: SublevelTransition) => numberCell(t.atFields.filter((a) => a.tesla.gt(0))[i]!.hz.div(MHZ), 12),
+        })),
       ],
     },
     f.transitions,

@@ -79,7 +79,23 @@ export function stickPlotSvg(input: StickPlotInput): string {
   const y0 = H - BOTTOM;
   const y1 = TOP;
   const X = (f: number) => x0 + ((f - lo) / (hi - lo)) * (x1 - x0);
-  const Y = (h: number) => y0 - (h / hMax) * (y0 - y1 - 14);
+  // The legend goes in the first top corner (right, left, middle) that no stick reaches into; where
+  // every corner is taken, the sticks are scaled down under a band kept free for it.
+  const order: (keyof typeof STYLE)[] = ["pi", "sigma+", "sigma-", "none"];
+  const shown = order.filter((k) => input.sticks.some((st) => key(st.polarization) === k));
+  const legendH = shown.length * 18 + 6;
+  const LEGEND_W = 134;
+  const fullY = (h: number) => y0 - (h / hMax) * (y0 - y1 - 14);
+  const covers = (left: number) =>
+    input.sticks.some((_, i) => {
+      const x = X(shifts[i]!);
+      return x >= left - 8 && x <= left + LEGEND_W + 8 && fullY(heights[i]!) <= y1 + 4 + legendH + 6;
+    });
+  const corners = [x1 - 138, x0 + 8, (x0 + x1) / 2 - LEGEND_W / 2];
+  const free = corners.find((left) => !covers(left));
+  const legendLeft = free ?? x1 - 138;
+  const reserve = free === undefined ? legendH + 10 : 0;
+  const Y = (h: number) => y0 - (h / hMax) * (y0 - y1 - 14 - reserve);
 
   const parts: string[] = [svgOpen(input.id, W, H, input.title, input.description)];
   parts.push(`<rect x="${x0}" y="${y1}" width="${x1 - x0}" height="${y0 - y1}" fill="#fff" stroke="#000"/>`);
@@ -107,10 +123,8 @@ export function stickPlotSvg(input: StickPlotInput): string {
     `<text class="axis-label" x="18" y="${px((y0 + y1) / 2)}" text-anchor="middle" transform="rotate(-90 18 ${px((y0 + y1) / 2)})">Relative strength</text>`,
   );
   parts.push(`<line x1="${px(X(0))}" y1="${y0}" x2="${px(X(0))}" y2="${y1}" stroke="#000" stroke-opacity="0.25"/>`);
-  const present = new Set<keyof typeof STYLE>();
   input.sticks.forEach((s, i) => {
     const k = key(s.polarization);
-    present.add(k);
     const x = X(shifts[i]!);
     const y = Y(heights[i]!);
     const dash = STYLE[k].dash;
@@ -119,9 +133,7 @@ export function stickPlotSvg(input: StickPlotInput): string {
     );
     parts.push(endMarker(k, x, y));
   });
-  const order: (keyof typeof STYLE)[] = ["pi", "sigma+", "sigma-", "none"];
-  const shown = order.filter((k) => present.has(k));
-  const lx = x1 - 132;
+  const lx = legendLeft + 6;
   let ly = y1 + 8;
   parts.push(`<g class="legend"><rect x="${lx - 6}" y="${ly - 4}" width="134" height="${shown.length * 18 + 6}" fill="#fff" stroke="#000" stroke-width="0.6"/>`);
   for (const k of shown) {

@@ -61,3 +61,20 @@ describe("stickPlotSvg", () => {
     expect(stickPlotSvg(input)).toBe(stickPlotSvg(input));
   });
 });
+
+describe("stick plot legend", () => {
+  it("stands where no stick reaches into it", async () => {
+    const { stickPlotSvg: plot } = await import("../../../src/site/plots/stickPlot.js");
+    const { dec: d } = await import("../../../src/physics/decimal.js");
+    // A pattern whose tallest sticks sit at both ends and in the middle: every top corner is taken.
+    const sticks = [-1, -0.5, 0, 0.5, 1].map((x) => ({ shift: d(String(x * 1e6)), strength: d("1"), polarization: x === 0 ? ("pi" as const) : ("sigma+" as const) }));
+    const svg = plot({ id: "p", title: "t", description: "d", sticks, wavelength: null, speedOfLight: d("299792458") });
+    const box = /<g class="legend"><rect x="([\d.]+)" y="([\d.]+)" width="([\d.]+)" height="([\d.]+)"/.exec(svg)!;
+    const [bx, by, bw, bh] = box.slice(1).map(Number) as [number, number, number, number];
+    for (const m of svg.matchAll(/<line class="stick"[^>]* x1="([\d.]+)"[^>]* y2="([\d.]+)"/g)) {
+      const [x, top] = [Number(m[1]), Number(m[2])];
+      const inside = x >= bx && x <= bx + bw && top <= by + bh;
+      expect(inside, `stick at x=${x} reaching y=${top}`).toBe(false);
+    }
+  });
+});
