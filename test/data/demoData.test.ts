@@ -1,0 +1,45 @@
+/**
+ * The demo data folder against published values (issue 10, "Demo data"):
+ * the demo's numbers are checked here, never used as check values. Every
+ * level and line names its source, and a value recalled rather than read
+ * says so in its source.
+ */
+import { describe, expect, it } from "vitest";
+import { loadDataFolder } from "../../src/data/loadDataFolder.js";
+import type { LevelInput, SpeciesInput } from "../../src/data/model.js";
+
+const demo = loadDataFolder("data");
+const species = (id: string): SpeciesInput => demo.species.find((s) => s.id === id)!;
+const level = (s: string, id: string): LevelInput => species(s).levels.find((l) => l.id === id)!;
+
+describe("demo data", () => {
+  it("has 87Rb 5²P1/2 A = 408.328(15) MHz and no rounded gJ override", () => {
+    const p = level("rb87", "5p-P1/2");
+    // 408.328(15) MHz (from memory: D. A. Steck, "Rubidium 87 D Line Data", the handbook the file cites)
+    expect(p.hyperfine!.A.si.toString()).toBe("408328000");
+    expect(p.hyperfine!.A.siUncertainty!.toString()).toBe("15000");
+    expect(p.gJ).toBeNull();
+    expect(p.source).toMatch(/from memory/);
+  });
+
+  it("has 23Na 3²S1/2 gJ = 2.0022960(14)", () => {
+    const g = level("na23", "3s-S1/2").gJ!;
+    // 2.0022960(14) (from memory: D. A. Steck, "Sodium D Line Data", the handbook the file cites)
+    expect(g.value.toString()).toBe("2.002296");
+    expect(g.uncertainty!.toString()).toBe("0.0000014");
+  });
+
+  it("has a measured gJ near 1.486 for 202Hg 6s6p ³P1", () => {
+    const g = level("hg202", "6s6p-3P1").gJ!;
+    // about 1.486 (from memory: the NIST Atomic Spectra Database level compilation of Hg I); LS would give 1.5
+    expect(Math.abs(g.value.toNumber() - 1.486)).toBeLessThan(0.001);
+    expect(level("hg202", "6s6p-3P1").source).toMatch(/from memory/);
+  });
+
+  it("names a source on every level and every line", () => {
+    for (const s of demo.species) {
+      for (const l of s.levels) expect(l.source.length, `${s.id} ${l.id}`).toBeGreaterThan(10);
+      for (const ln of s.lines) expect((ln.source ?? "").length, `${s.id} ${ln.id}`).toBeGreaterThan(10);
+    }
+  });
+});
