@@ -15,7 +15,7 @@ import { join } from "node:path";
 import { setImmediate as turn } from "node:timers/promises";
 import { shownPath } from "../data/loadDataFolder.js";
 import type { DataFolder } from "../data/model.js";
-import { hasPack, holdsToken, restorePack, speciesKey, stampFits, type KeySettings } from "./cache.js";
+import { hasPack, holdsSentinel, restorePack, speciesKey, type KeySettings } from "./cache.js";
 import type { DataSnapshot } from "./dataSnapshot.js";
 import { pageRenderer } from "./renderPages.js";
 import type { SpeciesSummary } from "./speciesBuild.js";
@@ -42,12 +42,13 @@ export interface AllSpeciesResult {
 export async function buildAllSpecies(folder: DataFolder, snapshot: DataSnapshot, opts: AllSpeciesOptions): Promise<AllSpeciesResult> {
   const { setup } = opts;
   const stamp = { date: setup.frame.build.date, dataVersion: setup.frame.build.dataVersion };
-  const caching = setup.packs !== null && stampFits(stamp) && !holdsToken(Buffer.from(JSON.stringify(opts.settings)));
+  const sentinel = setup.sentinel;
+  const caching = setup.packs !== null && sentinel !== null && !holdsSentinel(Buffer.from(JSON.stringify(opts.settings)), sentinel);
   const inputs = new Map(folder.species.map((s) => [s.id, s]));
   const tasks: SpeciesTask[] = folder.species.map((s) => {
     const bytes = snapshot.species.get(s.file);
     if (!bytes) throw new Error(`${s.file} is missing from the snapshot of the data folder`);
-    const key = caching && !holdsToken(bytes) ? speciesKey(s.file, bytes, opts.settings) : null;
+    const key = caching && !holdsSentinel(bytes, sentinel!) ? speciesKey(s.file, bytes, opts.settings, sentinel!) : null;
     return { id: s.id, file: s.file, shown: shownPath(join(folder.dir, s.file)), bytes, key };
   });
 
@@ -88,7 +89,7 @@ export async function buildAllSpecies(folder: DataFolder, snapshot: DataSnapshot
     const write = stagedWriter(setup.staging, gate);
     for (const t of hits) {
       if (failure) break;
-      const summary = timed("cache", () => restorePack(setup.packs!, t.key!, stamp, write));
+      const summary = timed("cache", () => restorePack(setup.packs!, t.key!, sentinel!, stamp, write));
       if (summary) {
         summaries.set(t.id, summary);
         keys.add(t.key!);

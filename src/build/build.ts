@@ -21,7 +21,7 @@ import { constantsTable, siteFrameParts, type SiteSummary } from "../site/siteSu
 import { buildAllSpecies } from "./allSpecies.js";
 import { writeAnchors } from "./anchors.js";
 import { bundleBrowser } from "./bundleBrowser.js";
-import { cacheRoot, codeVersion, packDir, pruneCache } from "./cache.js";
+import { cacheRoot, codeVersion, packDir, pruneCache, sentinelFor } from "./cache.js";
 import { loadWithSnapshot } from "./dataSnapshot.js";
 import { ROOT } from "./paths.js";
 import { makeStagingDir, publish, recoverInterrupted } from "./publish.js";
@@ -98,7 +98,7 @@ export async function buildSite(opts: BuildOptions): Promise<BuildResult> {
   // --- species: restored from the cache, or computed in worker threads (allSpecies.ts); sorted by id ---
   const species = await timedAsync("species", () =>
     buildAllSpecies(folder, snapshot, {
-      setup: { staging, packs, constants: constants.edition, fields, siteUrl, frame, fault: opts.fault },
+      setup: { staging, packs, constants: constants.edition, fields, siteUrl, frame, sentinel: packs ? sentinelFor(build) : null, fault: opts.fault },
       settings: { code: packs ? codeVersion() : "", title: folder.site.title, lab: folder.site.lab, siteUrl: folder.site.siteUrl, pathPrefix: folder.site.pathPrefix, constants: constants.edition, fields },
       workers: opts.workers,
     }),

@@ -11,11 +11,13 @@
  *
  * Two values on every page change whenever any species changes: the build
  * date and the data-folder version (footer, bench sheet, export
- * `data_version`). The cached copy is rendered with placeholders of the same
- * length in their place, and they are filled in as each file is written, so
- * a page from the cache is byte for byte the page an uncached build writes
- * (same length, so the page-size splits are decided the same way). A species
- * whose input contains a placeholder's text is built without the cache.
+ * `data_version`). The cached copy is rendered with a stand-in stamp (a
+ * date in 1901 and a fixed non-hex version, see sentinelFor) whose every
+ * text form has the length of the real one, and the forms are replaced as
+ * each file is written, so a page from the cache is byte for byte the page
+ * an uncached build writes (same length, so the page-size splits are
+ * decided the same way). A species whose input contains a form of the
+ * stand-in is built without the cache.
  *
  * Where: ATLAS_CACHE, else `.atlas-cache/` beside the output folder
  * (`ATLAS_CACHE=off` builds without a cache). Packs are written to a
@@ -30,43 +32,72 @@ import { closeSync, existsSync, mkdirSync, openSync, readdirSync, readFileSync, 
 import { dirname, join, relative, resolve, sep } from "node:path";
 import { threadId } from "node:worker_threads";
 import type { SpeciesSummary } from "./speciesBuild.js";
+import { atlasFilters } from "../site/filters.js";
 import { ROOT } from "./paths.js";
 import { alive } from "./publish.js";
 
 /** Bumped when the pack format or what a key covers changes. */
-const FORMAT = "atlas-species-pack-1";
+const FORMAT = "atlas-species-pack-2";
 
-/** Stand-ins for the build date (an ISO date-time, 24 characters) and the data version (12 hex digits). */
-export const DATE_TOKEN = "~~atlas-build-date-x7q~~";
-export const VERSION_TOKEN = "~atlas-dv-z~";
-
+/** The two values of a build that every page shows. */
 export interface BuildStamp {
   date: string;
   dataVersion: string;
 }
 
-/** True when placeholders of these lengths can stand for the stamp (always, for dates in years 0–9999). */
-export function stampFits(stamp: BuildStamp): boolean {
-  return stamp.date.length === DATE_TOKEN.length && stamp.dataVersion.length === VERSION_TOKEN.length;
+/**
+ * Every text form in which the stamp reaches a page: the ISO date (footer
+ * <time datetime>, <meta>), the date as the `readableDate` template filter
+ * writes it, and the data version. A new form (a new filter applied to the
+ * date) must be added here; test/build/cachedBuild.test.ts fails until it is.
+ */
+export function stampForms(stamp: BuildStamp): string[] {
+  const readable = (atlasFilters as Record<string, unknown>).readableDate;
+  const forms = [stamp.date, stamp.dataVersion];
+  if (typeof readable === "function") forms.splice(1, 0, String(readable(stamp.date)));
+  return forms;
 }
 
-/** True when text (an input file) contains a placeholder, so placeholders could not be told from data. */
-export function holdsToken(bytes: Uint8Array): boolean {
-  const b = Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
-  return b.includes(DATE_TOKEN) || b.includes(VERSION_TOKEN);
-}
+const VERSION_SENTINEL = "~atlas-dv-z~";
 
-const DATE_BYTES = Buffer.from(DATE_TOKEN);
-const VERSION_BYTES = Buffer.from(VERSION_TOKEN);
-
-/** Put the stamp in place of the placeholders, in place (same lengths). */
-export function fillStamp(buf: Buffer, stamp: BuildStamp): Buffer {
-  for (const [token, value] of [
-    [DATE_BYTES, stamp.date],
-    [VERSION_BYTES, stamp.dataVersion],
-  ] as const) {
-    for (let at = buf.indexOf(token); at >= 0; at = buf.indexOf(token, at + token.length)) buf.write(value, at, "latin1");
+/**
+ * The stand-in stamp a cached copy is rendered with: a date in 1901 (same
+ * time of day for every build) whose every form has the byte length of the
+ * real date's form, and a data version of 12 characters no hex digest
+ * makes. Same lengths, so pages are exactly as long as with the real stamp
+ * and the page-size splits come out the same. Null when there is none
+ * (then the build does without the cache).
+ */
+export function sentinelFor(stamp: BuildStamp): BuildStamp | null {
+  if (Buffer.byteLength(stamp.dataVersion) !== VERSION_SENTINEL.length) return null;
+  const want = stampForms(stamp).map((f) => Buffer.byteLength(f));
+  for (let day = 0; day < 365; day++) {
+    const date = new Date(Date.UTC(1901, 0, 1 + day, 4, 5, 6, 789)).toISOString();
+    const sentinel = { date, dataVersion: VERSION_SENTINEL };
+    const forms = stampForms(sentinel);
+    if (forms.length !== want.length || forms.some((f, i) => Buffer.byteLength(f) !== want[i])) continue;
+    // Each form found on its own: none may hold another.
+    if (forms.some((f, i) => f.length < 6 || forms.some((g, j) => i !== j && g.includes(f)))) continue;
+    return sentinel;
   }
+  return null;
+}
+
+/** True when input bytes contain a form of the sentinel, which then could not be told from data. */
+export function holdsSentinel(bytes: Uint8Array, sentinel: BuildStamp): boolean {
+  const b = Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
+  return stampForms(sentinel).some((f) => b.includes(f));
+}
+
+/** Put the real stamp in place of the sentinel's forms, in place (same byte lengths). */
+export function fillStamp(buf: Buffer, sentinel: BuildStamp, stamp: BuildStamp): Buffer {
+  const to = stampForms(stamp);
+  stampForms(sentinel).forEach((form, i) => {
+    const token = Buffer.from(form);
+    const value = Buffer.from(to[i]!);
+    if (value.length !== token.length) throw new Error(`stamp form "${to[i]}" is not as long as its stand-in "${form}"`);
+    for (let at = buf.indexOf(token); at >= 0; at = buf.indexOf(token, at + token.length)) value.copy(buf, at);
+  });
   return buf;
 }
 
@@ -113,10 +144,10 @@ export interface KeySettings {
 }
 
 /** The key of one species' entry. */
-export function speciesKey(file: string, bytes: Uint8Array, settings: KeySettings): string {
+export function speciesKey(file: string, bytes: Uint8Array, settings: KeySettings, sentinel: BuildStamp): string {
   const h = createHash("sha256");
   h.update(FORMAT).update("\0");
-  h.update(JSON.stringify({ ...settings, file, tokens: [DATE_TOKEN, VERSION_TOKEN] })).update("\0");
+  h.update(JSON.stringify({ ...settings, file, sentinel })).update("\0");
   h.update(bytes);
   return h.digest("hex").slice(0, 40);
 }
@@ -154,7 +185,7 @@ export function writePack(dir: string, key: string, summary: SpeciesSummary, fil
  * it). Null when there is no usable entry: nothing has been written then,
  * except when `write` itself failed (that error is thrown).
  */
-export function restorePack(dir: string, key: string, stamp: BuildStamp, write: (path: string, bytes: Buffer) => void): SpeciesSummary | null {
+export function restorePack(dir: string, key: string, sentinel: BuildStamp, stamp: BuildStamp, write: (path: string, bytes: Buffer) => void): SpeciesSummary | null {
   const file = packFile(dir, key);
   let pack: Buffer;
   let header: { summary: SpeciesSummary; files: [string, number][] };
@@ -174,7 +205,7 @@ export function restorePack(dir: string, key: string, stamp: BuildStamp, write: 
     return null;
   }
   for (const [path, n] of header.files) {
-    write(path, fillStamp(pack.subarray(start, start + n), stamp));
+    write(path, fillStamp(pack.subarray(start, start + n), sentinel, stamp));
     start += n;
   }
   return header.summary;

@@ -3,7 +3,7 @@
  * thread (speciesWorker.ts) and in the main thread (a build with one
  * species to compute, or one core): buildSpecies with this build's frame,
  * each file written to the staging folder and, when the species is cached,
- * also kept for its cache entry with placeholders for the build stamp
+ * also kept for its cache entry, rendered with the stand-in build stamp
  * (see cache.ts).
  */
 import { mkdirSync, writeFileSync } from "node:fs";
@@ -16,7 +16,7 @@ import { editionByName } from "../physics/constants/editions.js";
 import type { ConstantsEdition } from "../physics/constants/constant.js";
 import { Dec } from "../physics/decimal.js";
 import type { ConfiguredField } from "../results/fieldTypes.js";
-import { DATE_TOKEN, fillStamp, VERSION_TOKEN, writePack, type BuildStamp } from "./cache.js";
+import { fillStamp, writePack, type BuildStamp } from "./cache.js";
 import type { RenderPage } from "./renderPages.js";
 import { buildSpecies, type SiteFrame, type SpeciesSummary } from "./speciesBuild.js";
 
@@ -30,6 +30,8 @@ export interface SpeciesSetup {
   siteUrl: string | null;
   /** The frame with the real build stamp. */
   frame: SiteFrame;
+  /** The stand-in stamp cached copies are rendered with (cache.ts); null without a cache. */
+  sentinel: BuildStamp | null;
   /** Test only: "species" fails each species after its files are written (ATLAS_FAULT, see src/cli/build.ts). */
   fault?: string;
 }
@@ -43,7 +45,7 @@ export interface SpeciesTask {
   shown: string;
   /** The validated bytes of the file (see dataSnapshot.ts). */
   bytes: Uint8Array;
-  /** Cache key, or null to build without placeholders and keep no entry. */
+  /** Cache key, or null to build with the real stamp and keep no entry. */
   key: string | null;
 }
 
@@ -119,9 +121,9 @@ export function speciesTools(setup: SpeciesSetup, render: RenderPage, gate: Writ
   };
 }
 
-/** The frame with placeholders for the stamp. */
-function tokenFrame(frame: SiteFrame): SiteFrame {
-  return { ...frame, build: { ...frame.build, date: DATE_TOKEN, dataVersion: VERSION_TOKEN } };
+/** The frame with another stamp. */
+function stamped(frame: SiteFrame, stamp: BuildStamp): SiteFrame {
+  return { ...frame, build: { ...frame.build, date: stamp.date, dataVersion: stamp.dataVersion } };
 }
 
 /**
@@ -134,24 +136,24 @@ export function runSpeciesTask(task: SpeciesTask, input: SpeciesInput, setup: Sp
   const stage = stagedWriter(setup.staging, tools.gate);
   const stamp: BuildStamp = { date: setup.frame.build.date, dataVersion: setup.frame.build.dataVersion };
   const packed: [string, Buffer][] = [];
-  const cached = task.key !== null;
-  const write = cached
+  const sentinel = task.key !== null ? setup.sentinel : null;
+  const write = sentinel
     ? (path: string, text: string) => {
         const raw = Buffer.from(text);
         packed.push([path, raw]);
-        stage(path, fillStamp(Buffer.from(raw), stamp));
+        stage(path, fillStamp(Buffer.from(raw), sentinel, stamp));
       }
     : (path: string, text: string) => stage(path, text);
   const summary = buildSpecies(input, {
     constants: tools.constants,
     configured: tools.configured,
     siteUrl: setup.siteUrl,
-    frame: cached ? tokenFrame(setup.frame) : setup.frame,
+    frame: sentinel ? stamped(setup.frame, sentinel) : setup.frame,
     render: tools.render,
     write,
   });
   if (setup.fault === "species") throw new Error(`building ${task.id} failed (ATLAS_FAULT=species)`);
   const plain = JSON.parse(JSON.stringify(summary)) as SpeciesSummary;
-  if (cached && setup.packs) writePack(setup.packs, task.key!, plain, packed);
+  if (sentinel && setup.packs) writePack(setup.packs, task.key!, plain, packed);
   return plain;
 }

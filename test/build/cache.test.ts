@@ -1,5 +1,5 @@
 /**
- * The species cache's parts: placeholders for the build stamp, packs written
+ * The species cache's parts: the stand-in build stamp, packs written
  * and read back, keys, and the clean-up that bounds the cache.
  */
 import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync, utimesSync, writeFileSync } from "node:fs";
@@ -8,18 +8,18 @@ import { afterEach, describe, expect, it } from "vitest";
 import {
   cacheRoot,
   codeVersion,
-  DATE_TOKEN,
   fillStamp,
   hasPack,
-  holdsToken,
+  holdsSentinel,
   pruneCache,
   restorePack,
+  sentinelFor,
   speciesKey,
-  stampFits,
-  VERSION_TOKEN,
+  stampForms,
   writePack,
   type KeySettings,
 } from "../../src/build/cache.js";
+import { readableDate } from "../../src/site/format.js";
 import type { SpeciesSummary } from "../../src/build/speciesBuild.js";
 import { tempDir } from "../support/runBuild.js";
 
@@ -30,37 +30,55 @@ const stamp = { date: "2027-01-01T00:00:00.000Z", dataVersion: "0123456789ab" };
 const summary = { id: "x", label: "X", url: "species/x/", exportUrl: "species/x/x.json", pages: 2 } as unknown as SpeciesSummary;
 const settings: KeySettings = { code: "c", title: "T", lab: null, siteUrl: null, pathPrefix: "/", constants: "CODATA 2022", fields: [{ text: "1 G", tesla: "0.0001" }] };
 
-describe("placeholders for the build stamp", () => {
-  it("have the lengths of an ISO date-time and of a data version", () => {
-    expect(stampFits(stamp)).toBe(true);
-    expect(stampFits({ ...stamp, date: new Date(Date.UTC(12000, 0, 1)).toISOString() })).toBe(false);
+describe("the stand-in build stamp", () => {
+  const sentinel = sentinelFor(stamp)!;
+
+  it("is a date in 1901 whose every form is as long as the real stamp's", () => {
+    expect(sentinel.date).toMatch(/^1901-/);
+    const real = stampForms(stamp);
+    const stand = stampForms(sentinel);
+    expect(real).toContain(readableDate(stamp.date));
+    expect(stand.map((f) => Buffer.byteLength(f))).toEqual(real.map((f) => Buffer.byteLength(f)));
+    // Month names and one- or two-digit days of other builds find stand-ins too.
+    for (const date of ["2026-05-01T00:00:00.000Z", "2026-09-30T23:59:59.999Z", "2027-12-17T12:00:00.000Z"]) {
+      const other = sentinelFor({ date, dataVersion: "abcdefabcdef" })!;
+      expect(stampForms(other).map((f) => f.length)).toEqual(stampForms({ date, dataVersion: "abcdefabcdef" }).map((f) => f.length));
+    }
+    expect(sentinelFor({ ...stamp, dataVersion: "short" })).toBeNull();
   });
 
-  it("are filled in place, every occurrence, leaving the rest alone", () => {
-    const text = `built ${DATE_TOKEN} · <code>${VERSION_TOKEN}</code>; again ${DATE_TOKEN}`;
-    expect(fillStamp(Buffer.from(text), stamp).toString()).toBe(`built ${stamp.date} · <code>${stamp.dataVersion}</code>; again ${stamp.date}`);
-    expect(fillStamp(Buffer.from("nothing here"), stamp).toString()).toBe("nothing here");
+  it("is replaced in place by the real stamp, every form and occurrence, leaving the rest alone", () => {
+    const [iso, readable, version] = stampForms(sentinel);
+    const text = `<time datetime="${iso}">${readable}</time> · <code>${version}</code>; again ${iso}`;
+    expect(fillStamp(Buffer.from(text), sentinel, stamp).toString()).toBe(
+      `<time datetime="${stamp.date}">${readableDate(stamp.date)}</time> · <code>${stamp.dataVersion}</code>; again ${stamp.date}`,
+    );
+    expect(fillStamp(Buffer.from("nothing here"), sentinel, stamp).toString()).toBe("nothing here");
   });
 
-  it("are found in input that contains them", () => {
-    expect(holdsToken(Buffer.from(`notes: "${VERSION_TOKEN}"`))).toBe(true);
-    expect(holdsToken(Buffer.from("notes: plain"))).toBe(false);
+  it("is found in input that contains one of its forms", () => {
+    expect(holdsSentinel(Buffer.from(`notes: "${stampForms(sentinel)[1]}"`), sentinel)).toBe(true);
+    expect(holdsSentinel(Buffer.from(`notes: "${sentinel.dataVersion}"`), sentinel)).toBe(true);
+    expect(holdsSentinel(Buffer.from("notes: plain"), sentinel)).toBe(false);
   });
 });
 
 describe("cache keys", () => {
   it("change with the file's bytes, its name and each setting", () => {
-    const base = speciesKey("species/a.yaml", Buffer.from("id: a\n"), settings);
-    expect(speciesKey("species/a.yaml", Buffer.from("id: a\n"), settings)).toBe(base);
+    const sentinel = sentinelFor(stamp)!;
+    const key = (file: string, text: string, s: KeySettings, st = sentinel) => speciesKey(file, Buffer.from(text), s, st);
+    const base = key("species/a.yaml", "id: a\n", settings);
+    expect(key("species/a.yaml", "id: a\n", settings)).toBe(base);
     const others = [
-      speciesKey("species/a.yaml", Buffer.from("id: a \n"), settings),
-      speciesKey("species/b.yaml", Buffer.from("id: a\n"), settings),
-      speciesKey("species/a.yaml", Buffer.from("id: a\n"), { ...settings, code: "d" }),
-      speciesKey("species/a.yaml", Buffer.from("id: a\n"), { ...settings, title: "U" }),
-      speciesKey("species/a.yaml", Buffer.from("id: a\n"), { ...settings, lab: "L" }),
-      speciesKey("species/a.yaml", Buffer.from("id: a\n"), { ...settings, siteUrl: "https://lab.example" }),
-      speciesKey("species/a.yaml", Buffer.from("id: a\n"), { ...settings, pathPrefix: "/z/" }),
-      speciesKey("species/a.yaml", Buffer.from("id: a\n"), { ...settings, fields: [{ text: "2 G", tesla: "0.0002" }] }),
+      key("species/a.yaml", "id: a \n", settings),
+      key("species/b.yaml", "id: a\n", settings),
+      key("species/a.yaml", "id: a\n", { ...settings, code: "d" }),
+      key("species/a.yaml", "id: a\n", { ...settings, title: "U" }),
+      key("species/a.yaml", "id: a\n", { ...settings, lab: "L" }),
+      key("species/a.yaml", "id: a\n", { ...settings, siteUrl: "https://lab.example" }),
+      key("species/a.yaml", "id: a\n", { ...settings, pathPrefix: "/z/" }),
+      key("species/a.yaml", "id: a\n", { ...settings, fields: [{ text: "2 G", tesla: "0.0002" }] }),
+      key("species/a.yaml", "id: a\n", settings, sentinelFor({ ...stamp, date: "2027-05-01T00:00:00.000Z" })!),
     ];
     expect(new Set([base, ...others]).size).toBe(others.length + 1);
   });
@@ -89,17 +107,19 @@ describe("cache keys", () => {
 });
 
 describe("packs", () => {
+  const sentinel = sentinelFor(stamp)!;
+
   it("give back every file with the stamp filled in, and the summary", () => {
     dir = tempDir();
     const files: [string, Buffer][] = [
-      ["species/x/index.html", Buffer.from(`<footer>${DATE_TOKEN} ${VERSION_TOKEN}</footer>\n`)],
-      ["species/x/x.json", Buffer.from(`{"data_version": "${VERSION_TOKEN}", "λ": "µ"}\n`)],
+      ["species/x/index.html", Buffer.from(`<footer>${sentinel.date} ${sentinel.dataVersion}</footer>\n`)],
+      ["species/x/x.json", Buffer.from(`{"data_version": "${sentinel.dataVersion}", "λ": "µ"}\n`)],
       ["species/x/empty.csv", Buffer.alloc(0)],
     ];
     expect(writePack(dir, "k1", summary, files)).toBe(true);
     expect(hasPack(dir, "k1")).toBe(true);
     const got = new Map<string, string>();
-    const back = restorePack(dir, "k1", stamp, (p, b) => got.set(p, b.toString()));
+    const back = restorePack(dir, "k1", sentinel, stamp, (p, b) => got.set(p, b.toString()));
     expect(back).toEqual(summary);
     expect([...got]).toEqual([
       ["species/x/index.html", `<footer>${stamp.date} ${stamp.dataVersion}</footer>\n`],
@@ -116,7 +136,7 @@ describe("packs", () => {
     writeFileSync(join(dir, "k2.pack"), whole.subarray(0, whole.length - 1));
     writeFileSync(join(dir, "k3.pack"), Buffer.concat([Buffer.from("other-format\n"), whole.subarray(whole.indexOf(10) + 1)]));
     const writes: string[] = [];
-    for (const key of ["k0", "k2", "k3"]) expect(restorePack(dir, key, stamp, (p) => writes.push(p))).toBeNull();
+    for (const key of ["k0", "k2", "k3"]) expect(restorePack(dir, key, sentinel, stamp, (p) => writes.push(p))).toBeNull();
     expect(writes).toEqual([]);
   });
 });

@@ -8,7 +8,7 @@
 import { mkdirSync, rmSync } from "node:fs";
 import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { restorePack } from "../../src/build/cache.js";
+import { restorePack, sentinelFor } from "../../src/build/cache.js";
 import { loadWithSnapshot, type DataSnapshot } from "../../src/build/dataSnapshot.js";
 import { pageRenderer } from "../../src/build/renderPages.js";
 import { buildSpecies } from "../../src/build/speciesBuild.js";
@@ -31,18 +31,15 @@ function setup(name: string, packs: string | null = null): SpeciesSetup {
   const fields = folder.site.fields.map((f) => ({ text: f.text, tesla: f.tesla.toString() }));
   const staging = join(parent, name);
   mkdirSync(staging, { recursive: true });
+  const build = { date: "2027-01-01T00:00:00.000Z", constantsEdition: constants.edition, dataVersion: folder.dataVersion };
   return {
     staging,
     packs,
     constants: constants.edition,
     fields,
     siteUrl: null,
-    frame: {
-      title: folder.site.title,
-      lab: folder.site.lab,
-      build: { date: "2027-01-01T00:00:00.000Z", constantsEdition: constants.edition, dataVersion: folder.dataVersion },
-      sheets: siteFrameParts(constants, fields),
-    },
+    frame: { title: folder.site.title, lab: folder.site.lab, build, sheets: siteFrameParts(constants, fields) },
+    sentinel: packs ? sentinelFor(build) : null,
   };
 }
 
@@ -71,7 +68,7 @@ describe("a species", () => {
       const b = runSpeciesTask(task(id, `key-${id}`), speciesFromBytes(task(id, null)), cached, toolsOf(cached));
       expect(b).toStrictEqual(a);
       const stamp = { date: restored.frame.build.date, dataVersion: restored.frame.build.dataVersion };
-      expect(restorePack(packs, `key-${id}`, stamp, stagedWriter(restored.staging, new WriteGate()))).toStrictEqual(a);
+      expect(restorePack(packs, `key-${id}`, cached.sentinel!, stamp, stagedWriter(restored.staging, new WriteGate()))).toStrictEqual(a);
     }
     const want = treeFiles(direct.staging);
     expect(want.size).toBeGreaterThan(10);
