@@ -150,7 +150,7 @@ function render(w: Widget, data: EngineData, answer: AtResult<number>, fieldText
       const hf = lv.I2 > 0;
       sec.appendChild(
         table(
-          `${lv.term} (${l.id}): sublevel energies at ${at}, from the level centre`,
+          `${l.id} ${lv.term}: sublevel energies at ${at}, from the level centre`,
           [
             { label: hf ? "F" : "J", kind: "quantum" },
             { label: hf ? "mF" : "mJ", kind: "quantum" },
@@ -179,7 +179,7 @@ function render(w: Widget, data: EngineData, answer: AtResult<number>, fieldText
       if (mine.length === 0) continue;
       sec.appendChild(
         table(
-          `${terms.get(l.id)!.term} (${l.id}): transitions between sublevels at ${at} (microwave and radio frequency)`,
+          `${l.id} ${terms.get(l.id)!.term}: transitions between sublevels at ${at} (microwave and radio frequency)`,
           [
             { label: "lower (F, mF)", kind: "text" },
             { label: "upper (F, mF)", kind: "text" },
@@ -187,9 +187,9 @@ function render(w: Widget, data: EngineData, answer: AtResult<number>, fieldText
             { label: `f at ${at}`, unit: "MHz", kind: "number" },
           ],
           mine.map((t) => [
-            `(${t.lower.F}, ${signed(t.lower.mF)})`,
-            `(${t.upper.F}, ${signed(t.upper.mF)})`,
-            t.kind,
+            `${t.lower.F}, ${signed(t.lower.mF)}`,
+            `${t.upper.F}, ${signed(t.upper.mF)}`,
+            t.kind === "two-photon" ? "2-photon" : "M1",
             { text: show(t.Hz / MHZ, 12), value: t.Hz },
           ]),
           "calc-transitions",
@@ -218,7 +218,7 @@ function render(w: Widget, data: EngineData, answer: AtResult<number>, fieldText
           ln.components.map((c) => [
             signed(c.upper.replace(/=-/g, "=\u2212")),
             signed(c.lower.replace(/=-/g, "=\u2212")),
-            polarizationSymbol(c.polarization),
+            polarizationSymbol(c.polarization, c.delta_m),
             { text: show(c.relative_strength, 6), value: c.relative_strength },
             { text: show(c.shift_Hz / MHZ, 10), value: c.shift_Hz },
           ]),

@@ -12,6 +12,7 @@ import { hyperfineConstants, solverLevel, type SpeciesFieldResult } from "../res
 import type { ConfiguredField } from "../results/fieldTypes.js";
 import type { SpeciesResult } from "../results/types.js";
 import { sublevelTransitionPairs } from "../physics/field/sublevelTransitions.js";
+import { termText } from "../site/format.js";
 import { ENGINE_FORMAT, type EngineData } from "./types.js";
 
 const str = (x: Dec): string => x.toString();
@@ -50,7 +51,7 @@ export function engineData(
         B: str(lv.B),
         linearUpToT: strOrNull(v?.relative.tesla),
         paschenBackT: strOrNull(v?.paschenBackTesla),
-        term: l.input.term.text,
+        term: termText(l.input.term),
         fineStructureTerm: fields.termOf.get(l.input.id)?.key ?? null,
         S2: l.input.term.S2,
         L: l.input.term.L,

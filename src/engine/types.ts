@@ -26,7 +26,7 @@ export interface EngineLevel {
   linearUpToT: string | null;
   /** Hyperfine Paschen–Back scale (T), or null. */
   paschenBackT: string | null;
-  /** The level's term symbol as written in the data, e.g. "2P°3/2" (for captions). */
+  /** The level's term symbol typeset as the tables' captions write it (termText), e.g. "²P°₃/₂". */
   term: string;
   /** Key of the treated fine-structure term the level belongs to, or null. */
   fineStructureTerm: string | null;
