@@ -38,7 +38,6 @@ import type {
   LineAtFieldResult,
   LineComponentAtField,
   LineFieldResult,
-  Regime,
   TermFieldResult,
 } from "./fieldTypes.js";
 
