@@ -28,7 +28,7 @@
  * and a pack that cannot be written is skipped.
  */
 import { createHash } from "node:crypto";
-import { closeSync, existsSync, mkdirSync, openSync, readdirSync, readFileSync, renameSync, rmSync, statSync, utimesSync, writeSync } from "node:fs";
+import { closeSync, existsSync, fstatSync, mkdirSync, openSync, readdirSync, readFileSync, readSync, renameSync, rmSync, statSync, utimesSync, writeSync } from "node:fs";
 import { dirname, join, relative, resolve, sep } from "node:path";
 import { threadId } from "node:worker_threads";
 import type { SpeciesSummary } from "./speciesBuild.js";
@@ -155,60 +155,135 @@ export function speciesKey(file: string, bytes: Uint8Array, settings: KeySetting
 const packFile = (dir: string, key: string): string => join(dir, `${key}.pack`);
 
 /**
- * Write one entry: a first line naming the format, a second line of JSON
- * (summary and [path, byte length] of each file), then the files' bytes.
- * Best effort: returns false (and leaves nothing behind) when it cannot.
+ * One entry, written as the species' files are: a first line naming the
+ * format, the files' bytes one after another, the JSON index (summary and
+ * [path, byte length] of each file), and a last line giving the index's
+ * length. Streamed, so the entry never sits in memory whole. Best effort:
+ * after a failure the writer only counts, and nothing is left behind.
  */
-export function writePack(dir: string, key: string, summary: SpeciesSummary, files: [string, Buffer][]): boolean {
-  const tmp = join(dir, `.tmp-${process.pid}-${threadId}-${key}`);
-  let fd: number | null = null;
-  try {
-    mkdirSync(dir, { recursive: true });
-    fd = openSync(tmp, "w");
-    const header = JSON.stringify({ summary, files: files.map(([p, b]) => [p, b.length]) });
-    writeSync(fd, `${FORMAT}\n${header}\n`);
-    for (const [, b] of files) writeSync(fd, b);
-    closeSync(fd);
-    fd = null;
-    renameSync(tmp, packFile(dir, key));
-    return true;
-  } catch {
-    if (fd !== null) closeSync(fd);
-    rmSync(tmp, { force: true });
-    return false;
+export class PackWriter {
+  private fd: number | null = null;
+  private readonly tmp: string;
+  private readonly files: [string, number][] = [];
+
+  constructor(private readonly dir: string, private readonly key: string) {
+    this.tmp = join(dir, `.tmp-${process.pid}-${threadId}-${key}`);
+    try {
+      mkdirSync(dir, { recursive: true });
+      this.fd = openSync(this.tmp, "w");
+      writeSync(this.fd, `${FORMAT}\n`);
+    } catch {
+      this.abort();
+    }
+  }
+
+  add(path: string, bytes: Uint8Array): void {
+    if (this.fd === null) return;
+    try {
+      writeSync(this.fd, bytes);
+      this.files.push([path, bytes.length]);
+    } catch {
+      this.abort();
+    }
+  }
+
+  /** Close and publish the entry under its key; false when it could not be written. */
+  finish(summary: SpeciesSummary): boolean {
+    if (this.fd === null) return false;
+    try {
+      const index = Buffer.from(JSON.stringify({ summary, files: this.files }));
+      writeSync(this.fd, index);
+      writeSync(this.fd, `\n${String(index.length).padStart(TRAILER - 2, "0")}\n`);
+      closeSync(this.fd);
+      this.fd = null;
+      renameSync(this.tmp, packFile(this.dir, this.key));
+      return true;
+    } catch {
+      this.abort();
+      return false;
+    }
+  }
+
+  abort(): void {
+    if (this.fd !== null) {
+      try {
+        closeSync(this.fd);
+      } catch {
+        // already closed
+      }
+    }
+    this.fd = null;
+    rmSync(this.tmp, { force: true });
   }
 }
 
+/** Carries an error of restorePack's `write` past its own clean-up. */
+class WriteFailed extends Error {
+  constructor(cause: unknown) {
+    super("write failed", { cause });
+  }
+}
+
+/** "\n" + 15 digits of the index length + "\n". */
+const TRAILER = 17;
+
+/** Write one entry from files in memory (tests, small entries). */
+export function writePack(dir: string, key: string, summary: SpeciesSummary, files: [string, Uint8Array][]): boolean {
+  const w = new PackWriter(dir, key);
+  for (const [path, bytes] of files) w.add(path, bytes);
+  return w.finish(summary);
+}
+
 /**
- * Read one entry and hand each file to `write` with the stamp filled in;
- * the entry's time is set to now (so a concurrent build's clean-up keeps
- * it). Null when there is no usable entry: nothing has been written then,
- * except when `write` itself failed (that error is thrown).
+ * Read one entry, a file at a time, and hand each file to `write` with the
+ * stamp filled in; the entry's time is set to now (so a concurrent build's
+ * clean-up keeps it). Null when there is no usable entry; files handed over
+ * before a damaged part was found are written again by the species'
+ * recomputation (same paths). An error of `write` itself is thrown.
  */
 export function restorePack(dir: string, key: string, sentinel: BuildStamp, stamp: BuildStamp, write: (path: string, bytes: Buffer) => void): SpeciesSummary | null {
   const file = packFile(dir, key);
-  let pack: Buffer;
-  let header: { summary: SpeciesSummary; files: [string, number][] };
-  let start: number;
+  let fd: number;
   try {
-    pack = readFileSync(file);
-    const first = pack.indexOf(10);
-    const second = pack.indexOf(10, first + 1);
-    if (first < 0 || second < 0 || pack.toString("latin1", 0, first) !== FORMAT) return null;
-    header = JSON.parse(pack.toString("utf8", first + 1, second));
-    start = second + 1;
-    const total = header.files.reduce((a, [, n]) => a + n, 0);
-    if (start + total !== pack.length) return null;
-    const now = new Date();
-    utimesSync(file, now, now);
+    fd = openSync(file, "r");
   } catch {
     return null;
   }
-  for (const [path, n] of header.files) {
-    write(path, fillStamp(pack.subarray(start, start + n), sentinel, stamp));
-    start += n;
+  try {
+    const read = (at: number, n: number): Buffer => {
+      const b = Buffer.allocUnsafe(n);
+      if (readSync(fd, b, 0, n, at) !== n) throw new Error("short read");
+      return b;
+    };
+    const size = fstatSync(fd).size;
+    const head = Buffer.byteLength(`${FORMAT}\n`);
+    if (size < head + TRAILER || read(0, head).toString("latin1") !== `${FORMAT}\n`) return null;
+    const trailer = read(size - TRAILER, TRAILER).toString("latin1");
+    if (!/^\n\d{15}\n$/.test(trailer)) return null;
+    const indexLength = Number(trailer.slice(1, -1));
+    const indexAt = size - TRAILER - indexLength;
+    if (indexAt < head) return null;
+    const index = JSON.parse(read(indexAt, indexLength).toString("utf8")) as { summary: SpeciesSummary; files: [string, number][] };
+    if (head + index.files.reduce((a, [, n]) => a + n, 0) !== indexAt) return null;
+    const now = new Date();
+    utimesSync(file, now, now);
+    let at = head;
+    for (const [path, n] of index.files) {
+      const bytes = fillStamp(read(at, n), sentinel, stamp);
+      at += n;
+      try {
+        write(path, bytes);
+      } catch (e) {
+        throw new WriteFailed(e);
+      }
+    }
+    return index.summary;
+  } catch (e) {
+    if (e instanceof WriteFailed) throw e.cause;
+    return null;
+  } finally {
+    closeSync(fd);
   }
-  return header.summary;
 }
 
 /** True when an entry for the key exists (it may still turn out unreadable). */

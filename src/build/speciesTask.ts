@@ -16,7 +16,7 @@ import { editionByName } from "../physics/constants/editions.js";
 import type { ConstantsEdition } from "../physics/constants/constant.js";
 import { Dec } from "../physics/decimal.js";
 import type { ConfiguredField } from "../results/fieldTypes.js";
-import { fillStamp, writePack, type BuildStamp } from "./cache.js";
+import { fillStamp, PackWriter, type BuildStamp } from "./cache.js";
 import type { RenderPage } from "./renderPages.js";
 import { buildSpecies, type SiteFrame, type SpeciesSummary } from "./speciesBuild.js";
 
@@ -135,25 +135,32 @@ function stamped(frame: SiteFrame, stamp: BuildStamp): SiteFrame {
 export function runSpeciesTask(task: SpeciesTask, input: SpeciesInput, setup: SpeciesSetup, tools: SpeciesTools): SpeciesSummary {
   const stage = stagedWriter(setup.staging, tools.gate);
   const stamp: BuildStamp = { date: setup.frame.build.date, dataVersion: setup.frame.build.dataVersion };
-  const packed: [string, Buffer][] = [];
-  const sentinel = task.key !== null ? setup.sentinel : null;
+  const sentinel = task.key !== null && setup.packs ? setup.sentinel : null;
+  // The cache entry is streamed to disk beside the staged files, never held whole.
+  const pack = sentinel ? new PackWriter(setup.packs!, task.key!) : null;
   const write = sentinel
     ? (path: string, text: string) => {
-        const raw = Buffer.from(text);
-        packed.push([path, raw]);
-        stage(path, fillStamp(Buffer.from(raw), sentinel, stamp));
+        const bytes = Buffer.from(text);
+        pack!.add(path, bytes);
+        stage(path, fillStamp(bytes, sentinel, stamp));
       }
     : (path: string, text: string) => stage(path, text);
-  const summary = buildSpecies(input, {
-    constants: tools.constants,
-    configured: tools.configured,
-    siteUrl: setup.siteUrl,
-    frame: sentinel ? stamped(setup.frame, sentinel) : setup.frame,
-    render: tools.render,
-    write,
-  });
-  if (setup.fault === "species") throw new Error(`building ${task.id} failed (ATLAS_FAULT=species)`);
+  let summary: SpeciesSummary;
+  try {
+    summary = buildSpecies(input, {
+      constants: tools.constants,
+      configured: tools.configured,
+      siteUrl: setup.siteUrl,
+      frame: sentinel ? stamped(setup.frame, sentinel) : setup.frame,
+      render: tools.render,
+      write,
+    });
+    if (setup.fault === "species") throw new Error(`building ${task.id} failed (ATLAS_FAULT=species)`);
+  } catch (e) {
+    pack?.abort();
+    throw e;
+  }
   const plain = JSON.parse(JSON.stringify(summary)) as SpeciesSummary;
-  if (sentinel && setup.packs) writePack(setup.packs, task.key!, plain, packed);
+  pack?.finish(plain);
   return plain;
 }

@@ -11,6 +11,7 @@ import {
   fillStamp,
   hasPack,
   holdsSentinel,
+  PackWriter,
   pruneCache,
   restorePack,
   sentinelFor,
@@ -138,6 +139,34 @@ describe("packs", () => {
     const writes: string[] = [];
     for (const key of ["k0", "k2", "k3"]) expect(restorePack(dir, key, sentinel, stamp, (p) => writes.push(p))).toBeNull();
     expect(writes).toEqual([]);
+  });
+});
+
+describe("a pack being written", () => {
+  const sentinel = sentinelFor(stamp)!;
+
+  it("is streamed under a temporary name and appears only when finished; an aborted one leaves nothing", () => {
+    dir = tempDir();
+    const w = new PackWriter(dir, "k");
+    w.add("a.html", Buffer.from("a"));
+    expect(readdirSync(dir).filter((n) => n.endsWith(".pack"))).toEqual([]);
+    expect(w.finish(summary)).toBe(true);
+    expect(readdirSync(dir)).toEqual(["k.pack"]);
+    const dropped = new PackWriter(dir, "j");
+    dropped.add("b.html", Buffer.from("b"));
+    dropped.abort();
+    expect(dropped.finish(summary)).toBe(false);
+    expect(readdirSync(dir)).toEqual(["k.pack"]);
+  });
+
+  it("whose files cannot be written where restored passes the error on", () => {
+    dir = tempDir();
+    writePack(dir, "k", summary, [["a.html", Buffer.from("a")]]);
+    expect(() =>
+      restorePack(dir, "k", sentinel, stamp, () => {
+        throw new Error("disk full");
+      }),
+    ).toThrow("disk full");
   });
 });
 
