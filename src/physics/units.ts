@@ -1,53 +1,11 @@
 /**
- * Units the data files may use, and their exact factors to the SI unit of
- * their kind. Every factor is exact by definition (1 G = 1e-4 T; 1 cm⁻¹
- * corresponds to 100·c Hz with c = 299 792 458 m/s exact in the SI).
+ * Units the data files may use (the table is in unitTable.ts, which the page
+ * scripts share), and exact conversion to the SI unit of their kind.
  */
 import { Dec } from "./decimal.js";
+import { SPEED_OF_LIGHT_TEXT, UNITS } from "./unitTable.js";
 
-export type UnitKind = "frequency" | "field" | "length" | "mass";
-
-export interface UnitDef {
-  readonly kind: UnitKind;
-  /** Factor to Hz, T, m or u. */
-  readonly factor: string;
-}
-
-const C = "299792458";
-
-export const UNITS: Readonly<Record<string, UnitDef>> = Object.freeze({
-  Hz: { kind: "frequency", factor: "1" },
-  kHz: { kind: "frequency", factor: "1e3" },
-  MHz: { kind: "frequency", factor: "1e6" },
-  GHz: { kind: "frequency", factor: "1e9" },
-  THz: { kind: "frequency", factor: "1e12" },
-  "cm-1": { kind: "frequency", factor: `${C}e2` },
-  "cm^-1": { kind: "frequency", factor: `${C}e2` },
-  "cm⁻¹": { kind: "frequency", factor: `${C}e2` },
-  T: { kind: "field", factor: "1" },
-  mT: { kind: "field", factor: "1e-3" },
-  "µT": { kind: "field", factor: "1e-6" },
-  uT: { kind: "field", factor: "1e-6" },
-  G: { kind: "field", factor: "1e-4" },
-  mG: { kind: "field", factor: "1e-7" },
-  kG: { kind: "field", factor: "1e-1" },
-  m: { kind: "length", factor: "1" },
-  "µm": { kind: "length", factor: "1e-6" },
-  um: { kind: "length", factor: "1e-6" },
-  nm: { kind: "length", factor: "1e-9" },
-  pm: { kind: "length", factor: "1e-12" },
-  "Å": { kind: "length", factor: "1e-10" },
-  A: { kind: "length", factor: "1e-10" },
-  u: { kind: "mass", factor: "1" },
-  Da: { kind: "mass", factor: "1" },
-});
-
-/** The units of one kind, for error hints. */
-export function unitsOfKind(kind: UnitKind): string[] {
-  return Object.entries(UNITS)
-    .filter(([, d]) => d.kind === kind)
-    .map(([u]) => u);
-}
+export { UNITS, unitsOfKind, type UnitDef, type UnitKind } from "./unitTable.js";
 
 /** Convert value in `unit` to the SI unit of its kind. Exact. */
 export function toSI(value: Dec, unit: string): Dec {
@@ -57,4 +15,4 @@ export function toSI(value: Dec, unit: string): Dec {
 }
 
 /** Exact speed of light, m/s, for wavelength ↔ frequency conversions. */
-export const SPEED_OF_LIGHT = new Dec(C);
+export const SPEED_OF_LIGHT = new Dec(SPEED_OF_LIGHT_TEXT);

@@ -1,13 +1,14 @@
 /**
  * The data-sort attribute of a table cell: always in number, fraction and
  * quantum columns, and in text and term columns only where the browser
- * could not read the same key from the cell's text (templates/assets/tables.js
- * falls back to the text, folded the same way as `shownKey` below). Numeric
+ * could not read the same key from the cell's text (src/browser/tables.ts
+ * falls back to the text, folded by `shownKey` of cellText.ts). Numeric
  * keys are cut to SORT_DIGITS significant digits in the page; the CSV and
  * the JSON export keep the full `sort` of the cell.
  */
 import { NOTE_FOLD, noteSummary } from "./note.js";
 import { dec, exportText } from "../physics/decimal.js";
+import { shownKey } from "./cellText.js";
 import type { Cell, ColumnKind } from "./table.js";
 
 /**
@@ -29,16 +30,7 @@ export function shownText(c: Cell, kind: ColumnKind): string {
   return c.text;
 }
 
-/**
- * What tables.js sorts a cell without data-sort by: its text with thin and
- * no-break spaces dropped and trimmed (String.prototype.trim also drops the
- * figure and punctuation spaces of the padding); "—" is empty. The true
- * minus is kept, so a label such as "mF=−1" is its own key.
- */
-export function shownKey(text: string): string {
-  const s = text.replace(/[\u2009\u202f\u00a0]/g, "").trim();
-  return s === "—" ? "" : s;
-}
+export { shownKey };
 
 const NUMERIC_KINDS = new Set<ColumnKind>(["number", "fraction", "quantum"]);
 

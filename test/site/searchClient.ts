@@ -1,11 +1,14 @@
 /**
- * The browser scripts of templates/assets evaluated in a node:vm context, as
- * classic scripts see them (one shared global), for tests without a browser.
+ * The page scripts evaluated in a node:vm context, as classic scripts see
+ * them (one shared global), for tests without a browser. The scripts are
+ * bundled from src/browser/ exactly as the build bundles them
+ * (src/build/bundleBrowser.ts), once per test process.
  */
-import { readFileSync } from "node:fs";
+import { existsSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 import vm from "node:vm";
-import { ROOT } from "../support/runBuild.js";
+import { bundleBrowser } from "../../src/build/bundleBrowser.js";
+import { ROOT, tempDir } from "../support/runBuild.js";
 
 export interface FinderRow {
   kind: string;
@@ -38,5 +41,16 @@ export function clientContext(scripts: (string | { code: string })[]): ClientGlo
   return ctx as unknown as ClientGlobal;
 }
 
-export const ASSET = (name: string) => join(ROOT, "templates/assets", name);
+let bundled: string | null = null;
+
+/** A page script as the build writes it: "units.js" is src/browser/units.ts bundled into a classic script. */
+export function ASSET(name: string): string {
+  if (!bundled) {
+    bundled = tempDir("atlas-bundle-");
+    bundleBrowser(bundled);
+  }
+  const out = join(bundled, "assets", name);
+  // Scripts not yet moved to src/browser/ are still read from templates/assets/.
+  return existsSync(out) ? out : join(ROOT, "templates/assets", name);
+}
 export const MINISEARCH = join(ROOT, "node_modules/minisearch/dist/umd/index.js");
