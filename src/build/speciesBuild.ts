@@ -5,6 +5,7 @@
  * comes back as a small summary. The build runs this once per species, in
  * turn or in worker threads, so memory holds one species at a time.
  */
+import { Dec } from "../physics/decimal.js";
 import { val, type ConstantsEdition } from "../physics/constants/constant.js";
 import type { SpeciesInput } from "../data/model.js";
 import { computeSpecies } from "../results/computeSpecies.js";
@@ -142,7 +143,7 @@ export function buildSpecies(input: SpeciesInput, ctx: SpeciesBuildContext): Spe
     id,
     label: input.label,
     url: speciesPath(id),
-    sheet: speciesSheet(result, { mList: true }),
+    sheet: speciesSheet(result, { mList: true }, { result: fields, maxTesla: Dec.max(new Dec(0), ...ctx.configured.map((f) => f.tesla)) }),
     sheetAddress: sheetAddress(ctx.siteUrl, sheetPath(id)),
   };
   const sheetHtml = timed("render", () => ctx.render("species/sheet.njk", `/${htmlFile(sheetPath(id))}`, { s: sheetView, atlas, pageTitle: `${input.label} bench sheet` }));

@@ -14,7 +14,8 @@ import { Dec } from "../physics/decimal.js";
 import { hzPerTeslaToMHzPerGauss } from "../physics/zeeman.js";
 import { formatDoubled } from "../physics/quantum.js";
 import type { HyperfineLevelResult, LevelResult, LineResult, SpeciesResult, SublevelShift } from "../results/types.js";
-import { formatM, formatNumber, formatQuantum, partsText, writtenParts } from "./format.js";
+import { formatFraction, formatM, formatNumber, formatQuantum, partsText, writtenParts } from "./format.js";
+import type { SpeciesFieldResult } from "../results/computeFields.js";
 import { levelAnchor, lineAnchor } from "./anchors.js";
 import { fractionCell, measuredCell, numberCell, type Cell, type Table, termCell, textCell } from "./table.js";
 import { makeTable } from "./tableSpec.js";
@@ -61,6 +62,15 @@ export interface SpeciesSheet {
   lines: Table;
   /** False when some list had to give negative m too (never for linear shifts). */
   allOdd: boolean;
+  /** Short sentences for the bench (per-species sheet only; empty on the all-species sheet). */
+  notes: {
+    /** Zero-field hyperfine splittings, one per level with two or more F. */
+    splittings: string[];
+    /** Field-insensitive sublevel transitions: states, field, frequency there, second-order coefficient at B = 0. */
+    insensitive: string[];
+    /** Where each level's linear shifts stop holding to 1 %. */
+    validity: string[];
+  };
 }
 
 export interface SheetOptions {
@@ -78,7 +88,64 @@ interface SheetLevelRow {
   hf: HyperfineLevelResult | null;
 }
 
-export function speciesSheet(s: SpeciesResult, opts: SheetOptions): SpeciesSheet {
+/** Lorentz shifts and strengths of a line's J-resolved components, grouped by polarization: "π 0 (2/3) · σ± ±4/3 (1/6)". */
+export function componentList(ln: LineResult): string {
+  const groups = new Map<string, Map<string, string>>();
+  for (const c of ln.components) {
+    const label = c.polarization === null ? "Δm ±2" : c.polarization === "pi" ? "π" : "σ±";
+    const shift = c.shiftLorentzExact ? formatFraction(c.shiftLorentzExact.abs()) : formatNumber(c.shiftLorentz.abs(), 4);
+    const key = `${c.polarization === "pi" || shift === "0" ? "" : "±"}${shift}`;
+    const g = groups.get(label) ?? new Map<string, string>();
+    if (!g.has(key)) g.set(key, `${key} (${formatFraction(c.strength)})`);
+    groups.set(label, g);
+  }
+  return [...groups].map(([label, g]) => `${label} ${[...g.values()].join(", ")}`).join(" · ");
+}
+
+/** Field-insensitive transitions listed on a sheet, at most; the level pages list them all. */
+export const SHEET_INSENSITIVE = 6;
+
+/**
+ * The bench notes of a species from its field results (see SpeciesSheet.notes).
+ * Field-insensitive transitions: only those between different F (the
+ * microwave clock and qubit transitions) with their point at or below the
+ * largest configured field, lowest fields first, SHEET_INSENSITIVE at most.
+ */
+export function sheetNotes(s: SpeciesResult, fields: SpeciesFieldResult, maxTesla: Dec): SpeciesSheet["notes"] {
+  const MHZ = new Dec("1e6");
+  const splittings: string[] = [];
+  const insensitive: { tesla: Dec; text: string }[] = [];
+  const validity: string[] = [];
+  for (const l of s.levels) {
+    const byF = [...l.hyperfine].sort((a, b) => a.F2 - b.F2);
+    if (byF.length > 1) {
+      const steps = byF.slice(1).map((h, i) => `${formatQuantum(byF[i]!.F2)}↔${formatQuantum(h.F2)} ${formatNumber(h.zeroFieldHz.sub(byF[i]!.zeroFieldHz).div(MHZ), 9)}`);
+      splittings.push(`${l.input.id}: ${steps.join(", ")} MHz`);
+    }
+    const f = fields.levels.get(l.input.id);
+    if (!f) continue;
+    for (const t of f.transitions) {
+      if (t.lower.F2 === t.upper.F2) continue;
+      for (const p of t.fieldInsensitive) {
+        if (p.tesla.gt(maxTesla)) continue;
+        const state = (x: { F2: number; mF2: number }) => `|${formatQuantum(x.F2)}, ${formatM(x.mF2)}⟩`;
+        const quad = t.secondOrder ? `, ${formatNumber(t.secondOrder.hzPerGauss2, 5)} Hz/G² at 0 G` : "";
+        insensitive.push({ tesla: p.tesla, text: `${l.input.id} ${state(t.lower)}↔${state(t.upper)}: ${fieldLabel(p.tesla)}, ${formatNumber(p.hz.div(MHZ), 10)} MHz${quad}` });
+      }
+    }
+    if (f.validity?.relative.tesla) validity.push(`${l.input.id} ${fieldLabel(f.validity.relative.tesla)}`);
+  }
+  const shown = insensitive.sort((a, b) => a.tesla.cmp(b.tesla)).slice(0, SHEET_INSENSITIVE).map((x) => x.text);
+  return { splittings, insensitive: shown, validity };
+}
+
+/** A field for a sheet: gauss below 0.1 T, tesla from there on, 5 digits. */
+function fieldLabel(tesla: Dec): string {
+  if (tesla.isZero()) return "0 G";
+  return tesla.lt("0.1") ? `${formatNumber(tesla.mul("1e4"), 5)} G` : `${formatNumber(tesla, 5)} T`;
+}
+
+export function speciesSheet(s: SpeciesResult, opts: SheetOptions, fields?: { result: SpeciesFieldResult; maxTesla: Dec }): SpeciesSheet {
   let allOdd = true;
   const list = (subs: SublevelShift[]): Cell => {
     const l = shiftList(subs);
@@ -118,7 +185,7 @@ export function speciesSheet(s: SpeciesResult, opts: SheetOptions): SpeciesSheet
         { key: "wavelength", label: "λ", unit: "nm", kind: "number", cell: (ln) => (ln.input.wavelength ? wavelengthCell(ln.input.wavelength) : numberCell(null)) },
         { key: "g_eff", label: "g_eff", kind: "number", cell: (ln) => numberCell(ln.gEff, SHEET_DIGITS) },
         { key: "pattern", label: "pattern", kind: "text", cell: (ln) => textCell(ln.pattern ?? "—") },
-        { key: "reading", label: "reading", kind: "text", when: opts.mList, cell: (ln) => textCell(ln.summary) },
+        { key: "components", label: "components: shift in Lorentz units (strength)", kind: "text", when: opts.mList, cell: (ln) => textCell(componentList(ln)) },
       ],
     },
     s.lines,
@@ -132,6 +199,7 @@ export function speciesSheet(s: SpeciesResult, opts: SheetOptions): SpeciesSheet
     sublevels,
     lines,
     allOdd,
+    notes: opts.mList && fields ? sheetNotes(s, fields.result, fields.maxTesla) : { splittings: [], insensitive: [], validity: [] },
   };
 }
 
