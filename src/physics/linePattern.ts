@@ -10,8 +10,9 @@ import { Dec } from "./decimal.js";
 import { Rational } from "./rational.js";
 import { mValues } from "./quantum.js";
 import { threeJ } from "./wigner.js";
+import { polarizationOf, type Polarization } from "./polarization.js";
 
-export type Polarization = "sigma+" | "pi" | "sigma-" | null;
+export { polarizationOf, type Polarization } from "./polarization.js";
 export type Multipole = "E1" | "M1" | "E2";
 
 /** Rank k of a multipole: 1 for E1 and M1, 2 for E2. */
@@ -44,14 +45,6 @@ export interface PatternLevel {
   g: Dec | null;
   /** Exact LS g (gL = 1, gS = 2), null for J = 0. */
   gExact: Rational | null;
-}
-
-/** The polarization of a component with Δm = q (an ordinary integer); |q| = 2 has none. */
-export function polarizationOf(deltaM: number): Polarization {
-  if (deltaM === 1) return "sigma+";
-  if (deltaM === 0) return "pi";
-  if (deltaM === -1) return "sigma-";
-  return null;
 }
 
 /**

@@ -22,7 +22,7 @@ import {
   termStateAnchor,
   transitionAnchor,
 } from "./anchors.js";
-import { formatNumber, polarizationSymbol, termText } from "./format.js";
+import { formatNumber, polarizationSymbol, termText, transitionKindLabel } from "./format.js";
 import { fieldPlotSvg } from "./plots/fieldPlot.js";
 import { stickPlotSvg } from "./plots/stickPlot.js";
 import { csvName, safeFile, type TableHome } from "./linearTables.js";
@@ -144,7 +144,7 @@ export function transitionsTable(l: LevelResult, f: LevelFieldResult, fields: Co
                 : t.fieldInsensitive.map((p) => `${fieldText(p.tesla, 7)} (${formatNumber(p.hz.div(MHZ), 12)} MHz)`).join("; "),
             ),
         },
-        { key: "kind", label: "kind", kind: "text", cell: (t) => textCell(t.kind === "two-photon" ? "2-photon" : "M1") },
+        { key: "kind", label: "kind", kind: "text", cell: (t) => textCell(transitionKindLabel(t.kind)) },
         { key: "d1", label: "df/dB", unit: "kHz/G", kind: "number", cell: (t) => numberCell(t.firstOrder.hzPerGauss.div("1e3"), 9) },
         { key: "d2", label: "d²f/dB² ÷ 2", unit: "Hz/G²", kind: "number", cell: (t) => numberCell(t.secondOrder ? t.secondOrder.hzPerGauss2 : null, 7) },
         ...positive.map((b, i) => ({

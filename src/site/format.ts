@@ -6,11 +6,10 @@
  */
 import { Dec } from "../physics/decimal.js";
 import type { Rational } from "../physics/rational.js";
-import { formatDoubled } from "../physics/quantum.js";
 import { groupDigits, MINUS, SUPERSCRIPT, type NumberParts } from "./plainFormat.js";
 
 // The rules that need no decimal arithmetic live in plainFormat.ts, shared with the page scripts.
-export { FIGURE_SPACE, MINUS, THIN_SPACE, formatM, formatQuantum, groupDigits, partsText, type NumberParts } from "./plainFormat.js";
+export { FIGURE_SPACE, MINUS, THIN_SPACE, formatM, formatQuantum, groupDigits, partsText, polarizationSymbol, termText, transitionKindLabel, type NumberParts } from "./plainFormat.js";
 const group = groupDigits;
 
 /**
@@ -96,26 +95,7 @@ export function writtenDigits(text: string): number {
   return Math.max(1, digits.length);
 }
 
-/**
- * The label of a component's polarization as shown in tables and search:
- * σ+, π, σ−, and for the |Δm| = 2 components of a quadrupole line, which
- * are neither π nor σ, "Δm = +2" or "Δm = −2" (q = m_upper − m_lower; "Δm = ±2" when q is not given).
- */
-export function polarizationSymbol(p: "sigma+" | "pi" | "sigma-" | null, q?: number): string {
-  if (p === "sigma+") return "σ+";
-  if (p === "sigma-") return "σ−";
-  if (p === "pi") return "π";
-  return q === undefined ? "Δm = ±2" : `Δm = ${q > 0 ? "+" : MINUS}${Math.abs(q)}`;
-}
 
-const SUBSCRIPT: Record<string, string> = { "0": "₀", "1": "₁", "2": "₂", "3": "₃", "4": "₄", "5": "₅", "6": "₆", "7": "₇", "8": "₈", "9": "₉", "/": "/" };
-
-/** A term symbol typeset in plain text for captions and titles: ²P°₃/₂ (the data file may write 2Po3/2). */
-export function termText(t: { multiplicity: number; letter: string; parity: "odd" | null; J2: number }): string {
-  const sup = [...String(t.multiplicity)].map((ch) => SUPERSCRIPT[ch] ?? ch).join("");
-  const j = [...formatDoubled(t.J2)].map((ch) => SUBSCRIPT[ch] ?? ch).join("");
-  return `${sup}${t.letter}${t.parity === "odd" ? "°" : ""}${j}`;
-}
 
 const MONTHS = ["January", "February", "March", "April", "May", "June", "July", "August", "September", "October", "November", "December"];
 
