@@ -120,15 +120,27 @@ export interface TermFieldState {
 /** The states at one field: per listed level (input order), sorted by F then mF. */
 export type TermSolution = TermFieldState[][];
 
-interface Block {
+/** One M block of the prepared term (shared with the float64 twin, termHyperfineZeemanFloat.ts). */
+export interface TermBlock {
   M2: number;
+  /** Basis |J mJ mI⟩, J ascending then mJ ascending; `level` indexes TermProblem.levels. */
   basis: { J2: number; mJ2: number; mI2: number; level: number }[];
-  /** Field-free part: E_J − E_ref + hyperfine. */
+  /** Field-free part: E_J − E_ref + hyperfine of J. */
   fixed: Dec[][];
-  /** Zeeman part per unit (μB/h)·B. */
+  /** Zeeman part per unit (μB/h)·B: gJ·mJ + gI·mI on the diagonal, (gS − gL)·⟨J′|Sz|J⟩ off it. */
   zeeman: Dec[][];
-  /** (level index, F2) of the block's k-th lowest zero-field level. */
+  floatFixed: number[][];
+  floatZeeman: number[][];
+  /** Level index, F and high-field label of the block's k-th lowest zero-field level. */
   ranks: { level: number; F2: number; high: UncoupledState }[];
+}
+
+/** The field-independent parts of a term problem. */
+export interface PreparedTerm {
+  problem: TermProblem;
+  /** Energy subtracted from the diagonal (the lowest listed E_J), Hz. */
+  ref: Dec;
+  blocks: TermBlock[];
 }
 
 const C = (n: number | bigint) => new Dec(n.toString());
@@ -177,11 +189,12 @@ function validate(p: TermProblem): void {
 }
 
 /**
- * Prepare the field-independent parts once (blocks, couplings, labels) and
- * return the solver as a function of the field in tesla (B ≥ 0). See the
- * module comment for model, labels and accuracy; worked example there.
+ * The field-independent parts of the problem (blocks, couplings, labels),
+ * in Dec and float64. Exact like the inputs (Dec products; one Dec square
+ * root per Clebsch–Gordan coefficient). Worked example: 6Li 2P (I = 1) has
+ * blocks M = −5/2 … 5/2 of 1, 3, 5, 5, 3, 1 states.
  */
-export function termHyperfineZeemanSolver(p: TermProblem): (tesla: Dec) => TermSolution {
+export function prepareTerm(p: TermProblem): PreparedTerm {
   validate(p);
   const { I2, S2, L } = p;
   const ref = p.levels.reduce((m, l) => (l.energy.lt(m) ? l.energy : m), p.levels[0]!.energy);
@@ -192,7 +205,7 @@ export function termHyperfineZeemanSolver(p: TermProblem): (tesla: Dec) => TermS
   const zeroField = (i: number, F2: number) => p.levels[i]!.energy.plus(hyperfineShift(p.levels[i]!.A, p.levels[i]!.B, I2, p.levels[i]!.J2, F2));
   const dg = p.gS.minus(p.gL);
   const Mmax = Math.max(...p.levels.map((l) => l.J2)) + I2;
-  const blocks: Block[] = [];
+  const blocks: TermBlock[] = [];
   for (let M2 = -Mmax; M2 <= Mmax; M2 += 2) {
     const parts = order.map((i) => ({ i, block: byM[i]!.get(M2) })).filter((x) => x.block !== undefined) as { i: number; block: PreparedBlock }[];
     if (parts.length === 0) continue;
@@ -231,8 +244,18 @@ export function termHyperfineZeemanSolver(p: TermProblem): (tesla: Dec) => TermS
       .sort((x, y) => x.e.cmp(y.e) || p.levels[x.level]!.J2 - p.levels[y.level]!.J2 || x.F2 - y.F2)
       .map(({ level, F2, high }) => ({ level, F2, high }));
     if (ranks.length !== n) throw new Error("internal: block size does not match the number of (J, F) levels");
-    blocks.push({ M2, basis, fixed, zeeman, ranks });
+    blocks.push({ M2, basis, fixed, zeeman, ranks, floatFixed: fixed.map((r) => r.map((x) => x.toNumber())), floatZeeman: zeeman.map((r) => r.map((x) => x.toNumber())) });
   }
+  return { problem: p, ref, blocks };
+}
+
+/**
+ * Prepare the term once (prepareTerm) and return the solver as a function of
+ * the field in tesla (B ≥ 0). See the module comment for model, labels and
+ * accuracy; worked example there.
+ */
+export function termHyperfineZeemanSolver(problem: TermProblem | PreparedTerm): (tesla: Dec) => TermSolution {
+  const { problem: p, ref, blocks } = "blocks" in problem ? problem : prepareTerm(problem);
   return (tesla: Dec) => {
     if (tesla.isNegative()) throw new RangeError("field must be ≥ 0 T");
     const scale = p.muB_h.mul(tesla);

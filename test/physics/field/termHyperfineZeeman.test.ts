@@ -2,7 +2,8 @@ import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { Dec, dec, ZERO } from "../../../src/physics/decimal.js";
 import { solveHyperfineZeeman, type HyperfineZeemanLevel } from "../../../src/physics/field/hyperfineZeeman.js";
-import { spinZElement, termHyperfineZeemanSolver, type TermProblem } from "../../../src/physics/field/termHyperfineZeeman.js";
+import { prepareTerm, spinZElement, termHyperfineZeemanSolver, type TermProblem } from "../../../src/physics/field/termHyperfineZeeman.js";
+import { termHyperfineZeemanFloatSolver } from "../../../src/physics/field/termHyperfineZeemanFloat.js";
 import { landeLS } from "../../../src/physics/lande.js";
 import { CS133_6S, K40_4S, muB_h, RB87_5P32, RB87_5S } from "./levels.js";
 
@@ -106,5 +107,35 @@ describe("termHyperfineZeemanSolver", () => {
     // LS coupling, Clebsch–Gordan tables (common practice)
     const e = spinZElement(2, 1, 2, 0, 0);
     expect(e.mul(e).minus(dec("2").div(3)).abs().toNumber()).toBeLessThan(1e-55);
+  });
+
+  it("has a float64 twin that repeats the worked example (6Li 2P3/2 stretched state at 832 G)", () => {
+    const li = problemOf(FIXTURE.cases.find((c) => c.name === "6Li 2P")!);
+    const top = termHyperfineZeemanFloatSolver(li)(0.0832)[1]!.find((st) => st.mF2 === 5)!;
+    const p32 = li.levels[1]!;
+    // 3A/2 + B/4 + (μB/h)·B·(3gJ/2 + gI), hand arithmetic as in the Dec test
+    const want = p32.A.mul(3).div(2).plus(p32.B.div(4)).plus(muB_h.mul("0.0832").mul(p32.gJ.mul(3).div(2).plus(li.gI))).toNumber();
+    expect(Math.abs(top.energy - want)).toBeLessThan(1e-3);
+  });
+
+  it("has a float64 twin with the same labels, energies within 1e-9 relative or 1 Hz and slopes within 1e-9 relative or 1 Hz/T", () => {
+    for (const c of FIXTURE.cases) {
+      const prepared = prepareTerm(problemOf(c));
+      const exact = termHyperfineZeemanSolver(prepared);
+      const float = termHyperfineZeemanFloatSolver(prepared);
+      for (const t of ["0", "0.0027", "0.0832", "1"]) {
+        const a = exact(dec(t));
+        const b = float(Number(t));
+        a.forEach((lv, i) =>
+          lv.forEach((st, k) => {
+            const f = b[i]![k]!;
+            expect([f.J2, f.F2, f.mF2]).toEqual([st.J2, st.F2, st.mF2]);
+            // the float promise of a field calculator: 1e-9 relative or 1 Hz, whichever is larger (the Dec solver is the reference)
+            expect(Math.abs(f.energy - st.energy.toNumber())).toBeLessThan(Math.max(1, 1e-9 * Math.abs(st.energy.toNumber())));
+            expect(Math.abs(f.slope - st.slope.toNumber())).toBeLessThan(Math.max(1, 1e-9 * Math.abs(st.slope.toNumber())));
+          }),
+        );
+      }
+    }
   });
 });
