@@ -129,6 +129,7 @@ function levelFields(s: SpeciesResult, l: LevelResult, c: ConstantsEdition, fiel
   };
   return {
     rows,
+    hyperfineListed: hasHf ? l.input.hyperfine !== null : null,
     quadratic: { scope: partners.scope, included: partners.included, missingJ2: partners.missingJ2 },
     statesAtFields: perField,
     validity: hasHf ? linearValidity(level) : null,

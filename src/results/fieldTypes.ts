@@ -35,6 +35,8 @@ export interface FieldRow {
 
 export interface LevelFieldResult {
   rows: FieldRow[];
+  /** Species with nuclear spin: whether the level lists hyperfine constants (false: A = B = 0 used); null without nuclear spin. */
+  hyperfineListed: boolean | null;
   /** What the second-order coefficients of `rows` include (src/results/quadraticScope.ts). */
   quadratic: { scope: QuadraticScope; included: string[]; missingJ2: number[] };
   /** The solver's states at each configured field (reused by the line calculations). */

@@ -95,6 +95,7 @@ export function validityFacts(f: LevelFieldResult): string[] {
   if (!v) return ["No hyperfine structure: in this model the shifts are exactly linear; see the fine-structure section where partners are listed.", quadraticFact(f)];
   const first = (s: { F2: number; mF2: number } | null) => (s ? ` (first to leave: F = ${formatDoubled(s.F2)}, mF = ${formatDoubled(s.mF2)})` : "");
   return [
+    ...(f.hyperfineListed === false ? ["No hyperfine constants are listed for this level: A = B = 0 is used, so its states are the nuclear sublevels mI of each mJ, shifting by (gJ·mJ + gI·mI)·μB·B/h."] : []),
     quadraticFact(f),
     `Linear shifts within 1 % of the exact ones up to ${fieldText(v.relative.tesla)}${first(v.relative.sublevel)}.`,
     `Linear shifts within 1 kHz of the exact ones up to ${fieldText(v.absolute.tesla)}${first(v.absolute.sublevel)}.`,

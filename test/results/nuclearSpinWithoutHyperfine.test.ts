@@ -52,6 +52,11 @@ describe("a J = 0 level of a species with nuclear spin and no hyperfine constant
     }
   });
 
+  it("says that A = B = 0 was used (for the pages), and not for a level that lists its constants", () => {
+    expect(ground.hyperfineListed).toBe(false);
+    expect(fields.levels.get("5s5p-3P1")!.hyperfineListed).toBe(true);
+  });
+
   it("agrees with its own linear table (gF = gI)", () => {
     const hf = result.levels.find((l) => l.input.id === "5s2-1S0")!.hyperfine;
     expect(hf).toHaveLength(1);
