@@ -85,7 +85,7 @@ export function quadraticFact(f: LevelFieldResult): string {
   const q = f.quadratic;
   const missing = q.missingJ2.map((j) => `J = ${formatDoubled(j)}`).join(" and ");
   if (q.scope === "J-only") return `Quadratic coefficients within this J only: the fine-structure partners (${missing}) are not listed with energies.`;
-  const partners = q.included.length ? `include the fine-structure partners ${q.included.join(", ")} (second order through the Zeeman coupling between J levels of the term)` : "are complete: the term has no other J the field couples to";
+  const partners = q.included.length ? `include the fine-structure partner${q.included.length > 1 ? "s" : ""} ${q.included.join(", ")} (second order through the Zeeman coupling between J levels of the term)` : "are complete: the term has no other J the field couples to";
   return `Quadratic coefficients ${partners}${q.scope === "term-partial" ? `; ${missing} of the term not listed with an energy, so not included` : ""}.`;
 }
 
