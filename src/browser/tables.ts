@@ -1,5 +1,5 @@
 /**
- * Tables: a filter box above every table.atlas-table, sorting by any column
+ * Tables: one filter box per page section (for all its tables), sorting by any column
  * (header buttons with aria-sort, exact decimal order from data-sort), and
  * row links that copy the row's full URL. Progressive enhancement: without
  * JavaScript the tables are complete and every row link still jumps to its
@@ -25,54 +25,88 @@ function sortText(td: HTMLTableCellElement): string {
 
 let counter = 0;
 
+/** Tables with fewer rows than this get no filter box of their own section (one glance reads them). */
+export const FILTER_MIN_ROWS = 10;
+
+/** The part of the page a filter box serves: the table's top-level section (or the page's main). */
+function sectionOf(table: HTMLTableElement): HTMLElement {
+  let el: HTMLElement | null = table;
+  let top: HTMLElement | null = null;
+  while (el && el.tagName !== "MAIN") {
+    if (el.tagName === "SECTION") top = el;
+    el = el.parentElement;
+  }
+  return top ?? el ?? document.body;
+}
+
+/**
+ * One filter box per section, filtering every table of the section (the
+ * rows whose text holds every typed word stay); none where every table of
+ * the section has fewer than FILTER_MIN_ROWS rows.
+ */
+function addFilters(tables: FilterableTable[]): void {
+  const groups = new Map<HTMLElement, FilterableTable[]>();
+  for (const t of tables) {
+    const sec = sectionOf(t);
+    groups.set(sec, [...(groups.get(sec) ?? []), t]);
+  }
+  for (const [sec, group] of groups) {
+    const rows = group.flatMap((t) => Array.from(t.tBodies[0]?.rows ?? []));
+    if (!group.some((t) => (t.tBodies[0]?.rows.length ?? 0) >= FILTER_MIN_ROWS)) continue;
+    const n = ++counter;
+    const heading = sec.querySelector("h1, h2");
+    const title = heading ? plainText(heading.textContent ?? "") : "";
+    const tools = document.createElement("div");
+    tools.className = "table-tools";
+    tools.setAttribute("data-for", sec.id || heading?.id || `section-${n}`);
+    const label = document.createElement("label");
+    label.className = "table-filter";
+    label.setAttribute("for", `table-filter-${n}`);
+    label.textContent = group.length > 1 ? `Filter the ${group.length} tables of this section` : "Filter rows";
+    const input = document.createElement("input");
+    input.type = "search";
+    input.id = `table-filter-${n}`;
+    input.autocomplete = "off";
+    input.spellcheck = false;
+    input.setAttribute("aria-label", "Filter rows" + (title ? `: ${title}` : ""));
+    const count = document.createElement("span");
+    count.className = "table-count";
+    count.setAttribute("aria-live", "polite");
+    tools.append(label, input, count);
+    if (heading && heading.parentElement === sec) heading.after(tools);
+    else sec.prepend(tools);
+
+    // A row is found by its own text and by its table's caption (so "5p-P3/2" finds every table of that level).
+    const captionOf = (t: HTMLTableElement) =>
+      t.caption ? Array.from(t.caption.childNodes).map((c) => (c.nodeType === 1 && (c as Element).tagName === "A" ? "" : c.textContent ?? "")).join("") : "";
+    const texts = group.flatMap((t) => {
+      const cap = captionOf(t);
+      return Array.from(t.tBodies[0]?.rows ?? []).map((r) => plainText(`${cap} ${r.textContent ?? ""}`).toLowerCase());
+    });
+    const applyFilter = () => {
+      const words = plainText(input.value).toLowerCase().split(/\s+/).filter(Boolean);
+      let shown = 0;
+      rows.forEach((r, k) => {
+        const ok = words.every((w) => texts[k]!.includes(w));
+        r.hidden = !ok;
+        if (ok) shown++;
+      });
+      count.textContent = words.length ? `${shown} of ${rows.length} rows` : "";
+    };
+    input.addEventListener("input", applyFilter);
+    const clear = () => {
+      input.value = "";
+      applyFilter();
+    };
+    for (const t of group) t.atlasClearFilter = clear;
+  }
+}
+
 function enhance(table: FilterableTable): void {
   const tbody = table.tBodies[0];
   const head = table.tHead?.rows[0];
   if (!tbody || !head) return;
   const rows = Array.from(tbody.rows);
-  const n = ++counter;
-  // The caption's own words, without its download links.
-  const caption = table.caption
-    ? plainText(Array.from(table.caption.childNodes).map((c) => (c.nodeType === 1 && (c as Element).tagName === "A" ? "" : c.textContent ?? "")).join(""))
-    : "";
-
-  // Filter box, inserted above the table (or its scroll wrapper).
-  const tools = document.createElement("div");
-  tools.className = "table-tools";
-  if (table.id) tools.setAttribute("data-for", table.id);
-  const label = document.createElement("label");
-  label.className = "table-filter";
-  label.setAttribute("for", `table-filter-${n}`);
-  label.textContent = "Filter rows";
-  const input = document.createElement("input");
-  input.type = "search";
-  input.id = `table-filter-${n}`;
-  input.autocomplete = "off";
-  input.spellcheck = false;
-  input.setAttribute("aria-label", "Filter rows" + (caption ? `: ${caption}` : ""));
-  const count = document.createElement("span");
-  count.className = "table-count";
-  count.setAttribute("aria-live", "polite");
-  tools.append(label, input, count);
-  const wrap = table.parentElement?.classList.contains("table-wrap") ? table.parentElement : table;
-  wrap.parentNode!.insertBefore(tools, wrap);
-
-  const texts = rows.map((r) => plainText(r.textContent ?? "").toLowerCase());
-  const applyFilter = () => {
-    const words = plainText(input.value).toLowerCase().split(/\s+/).filter(Boolean);
-    let shown = 0;
-    rows.forEach((r, k) => {
-      const ok = words.every((w) => texts[k]!.includes(w));
-      r.hidden = !ok;
-      if (ok) shown++;
-    });
-    count.textContent = words.length ? `${shown} of ${rows.length} rows` : "";
-  };
-  input.addEventListener("input", applyFilter);
-  table.atlasClearFilter = () => {
-    input.value = "";
-    applyFilter();
-  };
 
   // Sort buttons in the header cells.
   const ths = Array.from(head.cells);
@@ -197,7 +231,9 @@ function reveal(): void {
 }
 
 function init(): void {
-  document.querySelectorAll<HTMLTableElement>("table.atlas-table").forEach(enhance);
+  const tables = Array.from(document.querySelectorAll<HTMLTableElement>("table.atlas-table"));
+  tables.forEach(enhance);
+  addFilters(tables);
   document.addEventListener("click", onClick);
   window.addEventListener("hashchange", reveal);
 }

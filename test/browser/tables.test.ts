@@ -38,26 +38,45 @@ describe.skipIf(!hasChromium)("table filter and sort in the browser", () => {
     return page;
   }
 
-  it("puts a filter box above every table", async () => {
+  // The sections of an overview are the page's <section> elements with an h2 (templates/_includes/species/overview.njk).
+  const SHIFTS = '.table-tools[data-for="h-shifts"], section[aria-labelledby="h-shifts"] > .table-tools';
+
+  it("puts one filter box in each section with a table of 10 rows or more, for all its tables, and none in small sections", async () => {
     const page = await open("species/rb87/");
-    const counts = await page.evaluate(() => [document.querySelectorAll("table.atlas-table").length, document.querySelectorAll(".table-tools input[type=search]").length]);
-    expect(counts[0]).toBeGreaterThan(3);
-    expect(counts[1]).toBe(counts[0]);
+    const boxes = await page.evaluate(() =>
+      Array.from(document.querySelectorAll("main > section")).map((sec) => [
+        sec.getAttribute("aria-labelledby"),
+        sec.querySelectorAll(".table-tools input[type=search]").length,
+        sec.querySelectorAll("table.atlas-table").length,
+        Math.max(0, ...Array.from(sec.querySelectorAll("table.atlas-table")).map((t) => (t as HTMLTableElement).tBodies[0]!.rows.length)),
+      ]),
+    );
+    for (const [id, inputs, tables, largest] of boxes as [string, number, number, number][]) {
+      expect(inputs, `${id}: ${tables} tables, largest ${largest} rows`).toBe(tables > 0 && largest >= 10 ? 1 : 0);
+    }
+    // rb87 (data/species/rb87.yaml): three levels, so no box on the levels table; the shift tables of 5p-P3/2 (16 sublevels) get one for the whole section.
+    expect(boxes.find((b) => b[0] === "h-levels")?.[1]).toBe(0);
+    expect(boxes.find((b) => b[0] === "h-shifts")?.[1]).toBe(1);
     await page.close();
   });
 
-  it("filters rows as the reader types and says how many are left", async () => {
+  it("filters the rows of every table of the section as the reader types and says how many are left", async () => {
     const page = await open("species/rb87/");
-    // rb87 has three levels (data/species/rb87.yaml); one of them is 5p-P3/2.
-    await page.locator('.table-tools[data-for="table-levels"] input').pressSequentially("P3/2");
-    expect(await page.evaluate(() => Array.from(document.querySelectorAll("#table-levels tbody tr")).filter((r) => !(r as HTMLElement).hidden).map((r) => r.id))).toEqual(["level:5p-P3/2"]);
-    expect(await page.locator('.table-tools[data-for="table-levels"] .table-count').textContent()).toBe("1 of 3 rows");
+    const box = page.locator(SHIFTS).first();
+    const visible = () =>
+      page.evaluate(() => Array.from(document.querySelectorAll('section[aria-labelledby="h-shifts"] tbody tr')).filter((r) => !(r as HTMLElement).hidden).map((r) => r.id));
+    const all = (await visible()).length;
+    await box.locator("input").pressSequentially("5p-P3/2");
+    const shown = await visible();
+    expect(shown.length).toBeGreaterThan(0);
+    for (const id of shown) expect(id).toContain("5p-P3/2");
+    expect(await box.locator(".table-count").textContent()).toBe(`${shown.length} of ${all} rows`);
     // A typed ASCII minus finds the page's true minus (U+2212).
-    await page.locator('.table-tools[data-for="table-mf:5s-S1/2"] input').pressSequentially("-2");
-    const shown = await page.evaluate(() => Array.from(document.querySelectorAll('[id="table-mf:5s-S1/2"] tbody tr')).filter((r) => !(r as HTMLElement).hidden).map((r) => r.id));
-    expect(shown).toContain("level:5s-S1/2:F=2:mF=-2");
-    await page.locator('.table-tools[data-for="table-levels"] input').fill("");
-    expect(await columnKeys(page, "table-levels", 0)).toHaveLength(3);
+    await box.locator("input").fill("");
+    await box.locator("input").pressSequentially("-2");
+    expect(await visible()).toContain("level:5s-S1/2:F=2:mF=-2");
+    await box.locator("input").fill("");
+    expect(await visible()).toHaveLength(all);
     expect(errors).toEqual([]);
     await page.close();
   });
@@ -108,10 +127,11 @@ describe.skipIf(!hasChromium)("table filter and sort in the browser", () => {
 
   it("shows a row reached by its anchor even when a filter had hidden it", async () => {
     const page = await open("species/rb87/");
-    await page.locator('.table-tools[data-for="table-levels"] input').pressSequentially("5s-S1/2");
-    expect(await page.evaluate(() => (document.getElementById("level:5p-P3/2") as HTMLElement).hidden)).toBe(true);
-    await page.evaluate(() => { location.hash = "level:5p-P3/2"; });
-    await page.waitForFunction(() => !(document.getElementById("level:5p-P3/2") as HTMLElement).hidden);
+    await page.locator(SHIFTS).first().locator("input").pressSequentially("5s-S1/2");
+    const row = "level:5p-P3/2:F=3:mF=3";
+    expect(await page.evaluate((id) => (document.getElementById(id) as HTMLElement).hidden, row)).toBe(true);
+    await page.evaluate((id) => { location.hash = id; }, row);
+    await page.waitForFunction((id) => !(document.getElementById(id) as HTMLElement).hidden, row);
     await page.close();
   });
 });
