@@ -234,6 +234,47 @@ export function writePack(dir: string, key: string, summary: SpeciesSummary, fil
   return w.finish(summary);
 }
 
+interface PackIndex {
+  summary: SpeciesSummary;
+  /** [path, byte length] of each file, in the order of their bytes. */
+  files: [string, number][];
+}
+
+/** Read `n` bytes at `at`, all or throw. */
+function readAt(fd: number, at: number, n: number): Buffer {
+  const b = Buffer.allocUnsafe(n);
+  if (readSync(fd, b, 0, n, at) !== n) throw new Error("short read");
+  return b;
+}
+
+/** The index of an open pack and where its files' bytes start; null when it is not a whole pack of this format. */
+function readIndex(fd: number): { index: PackIndex; start: number } | null {
+  const size = fstatSync(fd).size;
+  const head = Buffer.byteLength(`${FORMAT}\n`);
+  if (size < head + TRAILER || readAt(fd, 0, head).toString("latin1") !== `${FORMAT}\n`) return null;
+  const trailer = readAt(fd, size - TRAILER, TRAILER).toString("latin1");
+  if (!/^\n\d{15}\n$/.test(trailer)) return null;
+  const indexLength = Number(trailer.slice(1, -1));
+  const indexAt = size - TRAILER - indexLength;
+  if (indexAt < head) return null;
+  const index = JSON.parse(readAt(fd, indexAt, indexLength).toString("utf8")) as PackIndex;
+  if (head + index.files.reduce((a, [, n]) => a + n, 0) !== indexAt) return null;
+  return { index, start: head };
+}
+
+/** The index of a pack file (the benchmark reads the sizes of what a build wrote); null when unreadable. */
+export function packIndex(file: string): PackIndex | null {
+  let fd: number | null = null;
+  try {
+    fd = openSync(file, "r");
+    return readIndex(fd)?.index ?? null;
+  } catch {
+    return null;
+  } finally {
+    if (fd !== null) closeSync(fd);
+  }
+}
+
 /**
  * Read one entry, a file at a time, and hand each file to `write` with the
  * stamp filled in; the entry's time is set to now (so a concurrent build's
@@ -250,26 +291,13 @@ export function restorePack(dir: string, key: string, sentinel: BuildStamp, stam
     return null;
   }
   try {
-    const read = (at: number, n: number): Buffer => {
-      const b = Buffer.allocUnsafe(n);
-      if (readSync(fd, b, 0, n, at) !== n) throw new Error("short read");
-      return b;
-    };
-    const size = fstatSync(fd).size;
-    const head = Buffer.byteLength(`${FORMAT}\n`);
-    if (size < head + TRAILER || read(0, head).toString("latin1") !== `${FORMAT}\n`) return null;
-    const trailer = read(size - TRAILER, TRAILER).toString("latin1");
-    if (!/^\n\d{15}\n$/.test(trailer)) return null;
-    const indexLength = Number(trailer.slice(1, -1));
-    const indexAt = size - TRAILER - indexLength;
-    if (indexAt < head) return null;
-    const index = JSON.parse(read(indexAt, indexLength).toString("utf8")) as { summary: SpeciesSummary; files: [string, number][] };
-    if (head + index.files.reduce((a, [, n]) => a + n, 0) !== indexAt) return null;
+    const found = readIndex(fd);
+    if (!found) return null;
     const now = new Date();
     utimesSync(file, now, now);
-    let at = head;
-    for (const [path, n] of index.files) {
-      const bytes = fillStamp(read(at, n), sentinel, stamp);
+    let at = found.start;
+    for (const [path, n] of found.index.files) {
+      const bytes = fillStamp(readAt(fd, at, n), sentinel, stamp);
       at += n;
       try {
         write(path, bytes);
@@ -277,7 +305,7 @@ export function restorePack(dir: string, key: string, sentinel: BuildStamp, stam
         throw new WriteFailed(e);
       }
     }
-    return index.summary;
+    return found.index.summary;
   } catch (e) {
     if (e instanceof WriteFailed) throw e.cause;
     return null;

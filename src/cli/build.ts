@@ -72,6 +72,8 @@ try {
   await main();
 } catch (e) {
   cleanUp();
+  // Timings of a failed build too: the benchmark reports how far it got.
+  if (process.env.ATLAS_TIMINGS === "1") process.stderr.write(formatTimings() + "\n");
   const message = e instanceof Error ? e.message : String(e);
   process.stderr.write(e instanceof BuildStop ? `${message}\n` : `build failed: ${message}\n`);
   if (process.env.ATLAS_DEBUG === "1") {
