@@ -22,20 +22,29 @@ import { alignTable, numberCell, type Cell, type Column, type Row, type Table } 
  * The numerical-zero rule. Decimals carry 60 significant digits, and the
  * eigenvalue and root iterations stop within about 1e-50 of the largest
  * magnitude they handle; a computed value below NUMERICAL_ZERO times the
- * largest magnitude in its own column is therefore indistinguishable from 0
- * and is shown as 0 (the export keeps the digits as computed). Measured
- * inputs and exact fractions never come near this ratio.
+ * scale of its table is therefore indistinguishable from 0 and is shown as
+ * 0 (the export keeps the digits as computed). The scale is the largest
+ * magnitude among the table's number columns of the same unit (a column of
+ * energies at 0 G is all residue; its neighbours at other fields give the
+ * scale). Measured inputs and exact fractions never come near this ratio.
  */
 export const NUMERICAL_ZERO = new Dec("1e-40");
 
 function zeroNoise(rows: Row[], columns: Column[]): void {
+  const scales = new Map<string, Dec>();
+  const unitOf = (col: Column, i: number) => (col.unit === undefined ? `#${i}` : col.unit);
   columns.forEach((col, i) => {
     if (col.kind !== "number") return;
-    let scale = new Dec(0);
+    let scale = scales.get(unitOf(col, i)) ?? new Dec(0);
     for (const r of rows) {
       const c = r.cells[i]!;
       if (c.parts && c.sort) scale = Dec.max(scale, new Dec(c.sort).abs());
     }
+    scales.set(unitOf(col, i), scale);
+  });
+  columns.forEach((col, i) => {
+    if (col.kind !== "number") return;
+    const scale = scales.get(unitOf(col, i))!;
     if (scale.isZero()) return;
     const below = scale.mul(NUMERICAL_ZERO);
     for (const r of rows) {

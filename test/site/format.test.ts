@@ -103,12 +103,29 @@ describe("build date", () => {
 });
 
 describe("numerical zeros in tables", () => {
-  it("shows a computed value below 1e-40 of its column's largest magnitude as 0, and keeps the others", async () => {
+  it("shows a computed value below 1e-40 of its table's largest magnitude in the same unit as 0, and keeps the others", async () => {
     const { makeTable } = await import("../../src/site/tableSpec.js");
     const { numberCell: cell } = await import("../../src/site/table.js");
     // Values as the 60-digit solvers leave them: a zero-field shift of 1e-51 MHz beside shifts of order 1e3 MHz
     // (the 40-digit margin is the documented rule, src/site/tableSpec.ts).
     const t = makeTable({ id: "t", caption: "t", csvPath: "", anchor: (_r: string, i) => `r${i}`, columns: [{ key: "x", label: "x", kind: "number", cell: (r: string) => cell(dec(r), 9) }] }, ["1e-51", "-2563.005979", "1e-30", "0"]);
     expect(t.rows.map((r) => r.cells[0]!.text.replace(/[\u2007\u2008\u2009]/g, ""))).toEqual(["0", "−2563.00598", "1×10⁻³⁰", "0"]);
+  });
+});
+
+describe("numerical zeros in a column of residues", () => {
+  it("takes the scale from the table's other columns of the same unit", async () => {
+    const { makeTable } = await import("../../src/site/tableSpec.js");
+    const { numberCell: cell } = await import("../../src/site/table.js");
+    // A fine-structure shift table: at 0 G every shift is a residue near 1e-50 MHz, at 1 T they are of order 1e4 MHz.
+    const rows = [["-1e-50", "-13996.2"], ["2e-50", "9330.8"]];
+    const t = makeTable(
+      {
+        id: "t", caption: "t", csvPath: "", anchor: (_r: string[], i) => `r${i}`,
+        columns: [0, 1].map((k) => ({ key: `E${k}`, label: `E${k}`, unit: "MHz", kind: "number" as const, cell: (r: string[]) => cell(dec(r[k]!), 9) })),
+      },
+      rows,
+    );
+    expect(t.rows.map((r) => r.cells[0]!.text.replace(/[\u2007\u2008\u2009]/g, ""))).toEqual(["0", "0"]);
   });
 });
