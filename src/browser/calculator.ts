@@ -76,6 +76,9 @@ window.SublevelAtlas = api;
 
 const UNIT_ALIASES: Record<string, string> = { uT: "µT", "μT": "µT" };
 const MHZ = 1e6;
+const THZ = 1e12;
+/** Significant digits that show an absolute frequency in THz to 1 kHz, as the build's tables do (absoluteDigits in lockTables.ts). */
+const kHzDigits = (hz: number): number => Math.max(1, Math.floor(Math.log10(Math.abs(hz) / THZ)) + 1) + 9;
 
 const show = (x: number, sig: number): string => formatFloat(x, sig);
 const signed = (q: string) => q.replace(/^-/, "\u2212");
@@ -204,6 +207,7 @@ function render(w: Widget, data: EngineData, answer: AtResult<number>, fieldText
     const sec = el("section", undefined, "calc-part");
     sec.appendChild(el("h3", `Line components at ${at}`));
     for (const ln of lines) {
+      const absolute = ln.components.some((c) => c.frequency_Hz !== null);
       sec.appendChild(el("p", `${ln.id} at ${at}: ${ln.regime}; from ${ln.model}.`, "calc-model"));
       sec.appendChild(
         table(
@@ -214,6 +218,7 @@ function render(w: Widget, data: EngineData, answer: AtResult<number>, fieldText
             { label: "polarization", kind: "text" },
             { label: "relative strength", kind: "number" },
             { label: "shift from line centre", unit: "MHz", kind: "number" },
+            ...(absolute ? [{ label: "frequency", unit: "THz", kind: "number" as const }] : []),
           ],
           ln.components.map((c) => [
             signed(c.upper.replace(/=-/g, "=\u2212")),
@@ -221,6 +226,7 @@ function render(w: Widget, data: EngineData, answer: AtResult<number>, fieldText
             polarizationSymbol(c.polarization, c.delta_m),
             { text: show(c.relative_strength, 6), value: c.relative_strength },
             { text: show(c.shift_Hz / MHZ, 10), value: c.shift_Hz },
+            ...(absolute && c.frequency_Hz !== null ? [{ text: show(c.frequency_Hz / THZ, kHzDigits(c.frequency_Hz)), value: c.frequency_Hz }] : []),
           ]),
           "calc-components",
         ),

@@ -18,7 +18,9 @@
  *    hyperfine–Zeeman eigenstates, fine-structure Paschen–Back eigenstates
  *    (fineStructureFloatEigen) or the J-resolved linear pattern; components
  *    are computed by lineComponentsFloat, those weaker than 1e-20 of the line
- *    left out, sorted by shift then by descending Δm, as the build does.
+ *    left out, sorted by shift then by descending Δm, as the build does;
+ *    with the line's frequency ν0 = c/λ (engine data), each component's
+ *    absolute frequency ν0 + shift (lockPoints.ts absoluteFrequency).
  * Exact: no. Energies and frequencies agree with the 60-digit build to about
  * 1e-15 of the level's largest energy; strengths to about 1e-15 (absolute).
  * The tests hold it to 1e-9 relative or 1 Hz (1e-12 for strengths) at the
@@ -73,6 +75,8 @@ interface PreparedTerm {
 
 interface PreparedLine {
   data: EngineLine;
+  /** Line frequency c/λ, Hz (float64: 384 THz to 0.06 Hz), or null without a wavelength. */
+  centre: number | null;
   /** Components from hyperfine–Zeeman states (single reduced element). */
   hyperfine: FloatLineComponents;
   /** Components from fine-structure states (LS reduced elements, evaluated only when the model is chosen). */
@@ -132,6 +136,7 @@ function prepare(data: EngineData): PreparedSpecies {
     const l = levels.get(ln.lower)!.data;
     return {
       data: ln,
+      centre: ln.frequencyHz === undefined || ln.frequencyHz === null ? null : Number(ln.frequencyHz),
       hyperfine: lineComponentsFloat(ln.k, singleReducedElement),
       fineStructure: lineComponentsFloat(ln.k, lsReducedElement(u.L, l.L, u.S2, ln.k)),
       linear: ln.linear.map((x) => ({
@@ -238,6 +243,7 @@ export function engineAt(data: EngineData, tesla: number): AtResult<number> {
           polarization: x.polarization,
           relative_strength: x.strength,
           shift_Hz: x.shiftHzPerT * tesla,
+          frequency_Hz: ln.centre === null ? null : ln.centre + x.shiftHzPerT * tesla,
         })),
       };
     }
@@ -264,6 +270,7 @@ export function engineAt(data: EngineData, tesla: number): AtResult<number> {
           polarization: x.polarization,
           relative_strength: x.strength,
           shift_Hz: x.shift,
+          frequency_Hz: ln.centre === null ? null : ln.centre + x.shift,
         }),
       );
     return { id: ln.data.id, model, regime, components: list };

@@ -79,6 +79,7 @@ export function engineData(
       multipole: ln.input.multipole,
       k: ln.k,
       hyperfineBoth: hyperfineConstants(s, ln.upper) !== null && hyperfineConstants(s, ln.lower) !== null,
+      frequencyHz: strOrNull(ln.frequencyHz),
       linear: ln.components.map((x) => ({
         mu2: x.mu2,
         ml2: x.ml2,

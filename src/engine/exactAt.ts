@@ -16,6 +16,7 @@ import { computeFields, type SpeciesFieldResult } from "../results/computeFields
 import type { ConfiguredField } from "../results/fieldTypes.js";
 import type { SpeciesResult } from "../results/types.js";
 import { EXPORT_DIGITS } from "../site/exportJson.js";
+import { absoluteFrequency } from "../physics/lockPoints.js";
 import type { AtResult } from "./types.js";
 
 const num = (x: Dec): string => exportText(x, EXPORT_DIGITS);
@@ -55,6 +56,7 @@ export function atFromResults(s: SpeciesResult, f: SpeciesFieldResult, field: Co
           polarization: c.polarization,
           relative_strength: exportText(c.strength, 20),
           shift_Hz: num(c.shiftHz),
+          frequency_Hz: ln.frequencyHz === null ? null : num(absoluteFrequency(ln.frequencyHz, c.shiftHz)),
         })),
       };
     }),

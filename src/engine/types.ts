@@ -77,6 +77,8 @@ export interface EngineLine {
   k: number;
   /** Both levels have hyperfine structure in the build's sense (computeFields' hyperfineConstants). */
   hyperfineBoth: boolean;
+  /** Line frequency c/λ (the zero-field, hyperfine-free line centre), Hz, as a decimal string; null without a wavelength. Absent in data of older builds (read as null). */
+  frequencyHz?: string | null;
   linear: EngineLinearComponent[];
 }
 
@@ -117,6 +119,8 @@ export interface AtComponent<N> {
   polarization: Polarization;
   relative_strength: N;
   shift_Hz: N;
+  /** Absolute frequency of the component, the line frequency c/λ + shift_Hz; null when the line has no wavelength. */
+  frequency_Hz: N | null;
 }
 
 export interface AtLine<N> {

@@ -2,7 +2,8 @@
  * Comparison of a float64 calculator answer with an exact one (decimal
  * strings): the tolerance the calculator promises, 1e-9 relative or 1 Hz
  * absolute for frequencies (whichever is larger), 1e-9 relative or 1e-12
- * absolute for relative strengths. Components are matched by their state
+ * absolute for relative strengths; absolute frequencies (ν0 + shift) as
+ * their shift, plus the float64 spacing near ν0. Components are matched by their state
  * labels; a component only one side lists must be weaker than 1e-15 (both
  * sides drop those under 1e-20, and near that threshold float64 and Dec may
  * fall on different sides).
@@ -68,7 +69,14 @@ export function expectAgrees(float: AtResult<number>, exact: ExactAnswer, where:
       expect([f.delta_m, f.polarization], `${where} line ${ln.id} ${key(c)}`).toEqual([c.delta_m, c.polarization]);
       expectClose(f.relative_strength, c.relative_strength, STRENGTH, `${where} line ${ln.id} ${key(c)} relative_strength`);
       expectClose(f.shift_Hz, c.shift_Hz, HZ, `${where} line ${ln.id} ${key(c)} shift_Hz`);
-      n += 2;
+      // the absolute frequency ν0 + shift: the shift's tolerance, plus the float64 spacing near ν0 (0.0625 Hz at 384 THz)
+      if (c.frequency_Hz === null || f.frequency_Hz === null) expect([f.frequency_Hz, c.frequency_Hz], `${where} line ${ln.id} ${key(c)} frequency_Hz`).toEqual([null, null]);
+      else {
+        const allowed = Math.max(REL * Math.abs(Number(c.shift_Hz)), HZ) + 2 * Number.EPSILON * Number(c.frequency_Hz);
+        const diff = f.frequency_Hz - Number(c.frequency_Hz);
+        if (!(Math.abs(diff) <= allowed)) expect.fail(`${where} line ${ln.id} ${key(c)} frequency_Hz: calculator ${f.frequency_Hz}, exact ${c.frequency_Hz} (difference ${diff})`);
+      }
+      n += 3;
     }
     for (const c of fl.components) {
       if (!seen.has(key(c))) expect(c.relative_strength, `${where} line ${ln.id} ${key(c)} only in the calculator`).toBeLessThan(UNMATCHED);
