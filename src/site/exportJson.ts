@@ -10,6 +10,8 @@ import { formatDoubled } from "../physics/quantum.js";
 import type { SpeciesResult } from "../results/types.js";
 import type { SpeciesFieldResult } from "../results/computeFields.js";
 import type { ConfiguredField, LevelFieldResult, LineFieldResult } from "../results/fieldTypes.js";
+import { absoluteFrequency, lockPoints, vacuumWavelength } from "../physics/lockPoints.js";
+import { SPEED_OF_LIGHT } from "../physics/units.js";
 
 export const EXPORT_DIGITS = 30;
 export const EXPORT_FORMAT = "sublevel-atlas/export@1";
@@ -66,7 +68,13 @@ function levelFieldExport(f: LevelFieldResult, fields: ConfiguredField[]) {
   };
 }
 
-function lineFieldExport(f: LineFieldResult) {
+/** An absolute frequency ν0 + offset (Hz), or null when the line has no wavelength (lockPoints.ts). */
+const absolute = (nu0: Dec | null, offset: Dec) => (nu0 === null ? null : absoluteFrequency(nu0, offset));
+
+/** F values of a lock point: the shared level as a string, the pair as a two-element array. */
+const lockLevels = (F2: number[]) => (F2.length === 1 ? formatDoubled(F2[0]!) : F2.map(formatDoubled));
+
+function lineFieldExport(f: LineFieldResult, nu0: Dec | null) {
   return {
     at_fields: f.atFields.map((a) => ({
       B_T: fieldText(a.field.tesla),
@@ -80,6 +88,7 @@ function lineFieldExport(f: LineFieldResult) {
         polarization: c.polarization,
         relative_strength: exportText(c.strength, 20),
         shift_Hz: num(c.shiftHz),
+        frequency_Hz: num(absolute(nu0, c.shiftHz)),
       })),
     })),
     hyperfine_groups: f.hyperfine
@@ -88,6 +97,8 @@ function lineFieldExport(f: LineFieldResult) {
           F_lower: formatDoubled(g.Fl2),
           strength: g.strength.toString(),
           offset_Hz: num(g.offset),
+          frequency_Hz: num(absolute(nu0, g.offset)),
+          vacuum_wavelength_m: nu0 === null ? null : num(vacuumWavelength(absoluteFrequency(nu0, g.offset), SPEED_OF_LIGHT)),
           components: g.components.map((c) => ({
             mF_upper: formatDoubled(c.mFu2),
             mF_lower: formatDoubled(c.mFl2),
@@ -96,6 +107,15 @@ function lineFieldExport(f: LineFieldResult) {
             cycling: c.cycling,
             shift_Hz_per_T: num(c.shiftHzPerT),
           })),
+        }))
+      : [],
+    lock_points: f.hyperfine
+      ? lockPoints(f.hyperfine, nu0).map((p) => ({
+          kind: p.kind,
+          F_lower: lockLevels(p.Fl2),
+          F_upper: lockLevels(p.Fu2),
+          frequency_Hz: num(p.frequencyHz),
+          offset_Hz: num(p.offset),
         }))
       : [],
   };
@@ -107,9 +127,9 @@ export function speciesExport(s: SpeciesResult, ctx: ExportContext, fields?: { r
     const f = fields?.result.levels.get(levelId);
     return f && fields ? levelFieldExport(f, fields.configured) : {};
   };
-  const lineExtra = (lineId: string) => {
+  const lineExtra = (lineId: string, nu0: Dec | null) => {
     const f = fields?.result.lines.get(lineId);
-    return f ? lineFieldExport(f) : {};
+    return f ? lineFieldExport(f, nu0) : {};
   };
   return {
     format: EXPORT_FORMAT,
@@ -161,7 +181,7 @@ export function speciesExport(s: SpeciesResult, ctx: ExportContext, fields?: { r
         shift_Hz_per_T: num(c.shiftHzPerT),
         strength: c.strength.toString(),
       })),
-      ...lineExtra(ln.input.id),
+      ...lineExtra(ln.input.id, ln.frequencyHz),
     })),
   };
 }
