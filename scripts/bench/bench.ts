@@ -235,18 +235,19 @@ function run(size: SyntheticSize, work: string): void {
     } else say("rebuild after editing one species", `${s2(re.wallS)} until the build failed (${restored}): ${failure(re)}`);
   }
 
-  // 4. The floor: the same rendered files from static templates.
-  if (!flag("no-floor")) {
-    let from = "";
-    if (!ok) {
-      // Refused builds publish nothing; their cache entries list every species file and its size.
-      const packs = join(work, "set", ".atlas-cache", "species");
-      for (const name of existsSync(packs) ? readdirSync(packs).filter((n) => n.endsWith(".pack")) : []) {
-        for (const [f, n] of packIndex(join(packs, name))?.files ?? []) sizes.set(f, n);
-      }
-      files = [...sizes.keys()].sort();
-      from = " (species files as listed by the refused builds' cache; site-wide pages left out)";
+  // 4. The floor: the same rendered files from static templates (only their sizes are kept; the set's folders go first, to spare the disk).
+  let from = "";
+  if (!ok) {
+    // Refused builds publish nothing; their cache entries list every species file and its size.
+    const packs = join(work, "set", ".atlas-cache", "species");
+    for (const name of existsSync(packs) ? readdirSync(packs).filter((n) => n.endsWith(".pack")) : []) {
+      for (const [f, n] of packIndex(join(packs, name))?.files ?? []) sizes.set(f, n);
     }
+    files = [...sizes.keys()].sort();
+    from = " (species files as listed by the refused builds' cache; site-wide pages left out)";
+  }
+  rmSync(join(work, "set"), { recursive: true, force: true });
+  if (!flag("no-floor")) {
     if (files.length === 0) say("floor", "not measured: the set's build left no files to copy");
     else {
       const floor = join(work, "floor");
@@ -268,7 +269,6 @@ function run(size: SyntheticSize, work: string): void {
       rmSync(floor, { recursive: true, force: true });
     }
   }
-  rmSync(join(work, "set"), { recursive: true, force: true });
 
   // 5. Twice the set, cold.
   if (!flag("no-double")) {
