@@ -15,7 +15,7 @@ import { dirname, join, resolve } from "node:path";
 import { editionByName } from "../physics/constants/editions.js";
 import { tableCsv } from "../site/csv.js";
 import { publicBase } from "../site/publicBase.js";
-import { mergeSearchData, searchIndexScript } from "../site/searchIndex.js";
+import { constantsSearch, mergeSearchData, searchIndexScript } from "../site/searchIndex.js";
 import { sheetAddress } from "../site/sheet.js";
 import { constantsTable, siteFrameParts, type SiteSummary } from "../site/siteSummary.js";
 import { buildAllSpecies } from "./allSpecies.js";
@@ -106,7 +106,6 @@ export async function buildSite(opts: BuildOptions): Promise<BuildResult> {
   const summaries = species.summaries;
 
   // --- site-wide pages, from the summary ---
-  write("assets/search-index.js", timed("search", () => searchIndexScript(mergeSearchData(summaries.map((s) => s.search)))));
   const summary: SiteSummary = {
     title: folder.site.title,
     lab: folder.site.lab,
@@ -120,6 +119,7 @@ export async function buildSite(opts: BuildOptions): Promise<BuildResult> {
     sheets: { ...frame.sheets, all: summaries.map((s) => s.sheet), allAddress: sheetAddress(siteUrl, "sheet/") },
   };
   write(summary.constantsTable.csvPath, tableCsv(summary.constantsTable));
+  write("assets/search-index.js", timed("search", () => searchIndexScript(mergeSearchData(summaries.map((s) => s.search), constantsSearch(summary.constantsTable)))));
   await timedAsync("site", () => renderSitePages(staging, summary));
   timed("bundle", () => bundleBrowser(staging));
 
@@ -143,7 +143,7 @@ export async function buildSite(opts: BuildOptions): Promise<BuildResult> {
 /** Eleventy renders templates/*.njk (index, constants, methods, all-species sheet) and copies the assets. */
 async function renderSitePages(staging: string, summary: SiteSummary): Promise<void> {
   const { default: Eleventy } = await import("@11ty/eleventy");
-  // Passthrough copies (templates/assets, schema, node_modules/minisearch) are named from the repository root.
+  // Passthrough copies (templates/assets, schema) are named from the repository root.
   process.chdir(ROOT);
   const eleventy = new Eleventy(join(ROOT, "templates"), staging, {
     configPath: join(ROOT, ".eleventy.js"),

@@ -5,7 +5,7 @@
  * comes back as a small summary. The build runs this once per species, in
  * turn or in worker threads, so memory holds one species at a time.
  */
-import { Dec } from "../physics/decimal.js";
+import { Dec, exportText } from "../physics/decimal.js";
 import { val, type ConstantsEdition } from "../physics/constants/constant.js";
 import type { SpeciesInput } from "../data/model.js";
 import { computeSpecies } from "../results/computeSpecies.js";
@@ -13,12 +13,13 @@ import { computeFields } from "../results/computeFields.js";
 import type { ConfiguredField } from "../results/fieldTypes.js";
 import { tableCsv } from "../site/csv.js";
 import { speciesExport } from "../site/exportJson.js";
-import { exportPath, htmlFile, sheetPath, speciesPath } from "../site/pageUrls.js";
-import { searchData, type SearchData } from "../site/searchIndex.js";
+import { exportPath, htmlFile, levelPagePath, sheetPath, speciesPath } from "../site/pageUrls.js";
+import { searchData, type SearchData, type SearchSpecies } from "../site/searchIndex.js";
+import { fieldText } from "../site/fieldTables.js";
 import { sheetAddress, speciesSheet, type SpeciesSheet } from "../site/sheet.js";
 import { scanIds } from "../site/idScan.js";
 import type { Table } from "../site/table.js";
-import { levelViews, lineViews, overviewView, type PageView, type SpeciesViewsInput } from "../site/speciesViews.js";
+import { hasLevelPage, levelViews, lineViews, overviewView, type PageView, type SpeciesViewsInput } from "../site/speciesViews.js";
 import { hasPagesBelow, movedMap, movedScript, MOVED_FILE, type PageIds } from "./forwarding.js";
 import type { RenderPage } from "./renderPages.js";
 import { timed } from "./timings.js";
@@ -161,7 +162,27 @@ export function buildSpecies(input: SpeciesInput, ctx: SpeciesBuildContext): Spe
       nuclearSpin: input.nucleus ? (input.nucleus.I2 % 2 === 0 ? String(input.nucleus.I2 / 2) : `${input.nucleus.I2}/2`) : null,
     },
     sheet: speciesSheet(result, { mList: false }),
-    search: searchData({ species: [{ id, label: input.label, url, result }] }),
+    search: timed("search", () => searchData(searchSpecies(v, rendered.map((r) => r.view)), ctx.configured.map((f) => ({ text: f.text, tesla: exportText(f.tesla, 30) })))),
     pages: rendered.length + 1,
   };
+}
+
+/**
+ * What the search index needs of a species: its results, and for each level
+ * with a page its sublevel transitions (field-insensitive points written as
+ * the transitions table writes them) and the page that lists them.
+ */
+function searchSpecies(v: SpeciesViewsInput, views: PageView[]): SearchSpecies {
+  const s = v.result;
+  const transitionsPages = new Map(views.flatMap((view) => (view.kind === "transitions" ? [[view.levelId, htmlFile(view.path)] as const] : [])));
+  const levelPages: NonNullable<SearchSpecies["levelPages"]> = new Map();
+  for (const l of s.levels) {
+    if (!hasLevelPage(v.fields, l)) continue;
+    const f = v.fields.levels.get(l.input.id)!;
+    levelPages.set(l.input.id, {
+      transitions: f.transitions.map((t) => ({ ...t, fieldInsensitive: t.fieldInsensitive.map((p) => ({ tesla: p.tesla, text: fieldText(p.tesla, 7) })) })),
+      transitionsPage: transitionsPages.get(l.input.id) ?? htmlFile(levelPagePath(s.input.id, l.input.id)),
+    });
+  }
+  return { id: s.input.id, label: s.input.label, muB_h: v.muB_h, levels: s.levels, lines: s.lines, levelPages };
 }

@@ -17,8 +17,7 @@ interface EleventyConfigLike {
 export function atlasPlugin(eleventyConfig: EleventyConfigLike): void {
   // Static assets and the published input schemas.
   eleventyConfig.addPassthroughCopy({ "templates/assets": "assets", schema: "schema" });
-  // The search library as a classic script (module scripts do not load from file://).
-  eleventyConfig.addPassthroughCopy({ "node_modules/minisearch/dist/umd/index.js": "assets/minisearch.js" });
+  // The page scripts (finder with its search library, tables, units, …) are bundled by src/build/bundleBrowser.ts.
 
   // Every site-root link becomes relative to its page (works from file:// and under any prefix).
   // A string pass (rewriteRootLinks.ts) rather than Eleventy's HTML-parsing URL transform.

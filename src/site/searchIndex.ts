@@ -1,50 +1,98 @@
 /**
- * The site-wide search data, made at build time from the atlas and shipped
- * as a classic script (assets/search-index.js) that sets one global, so the
- * finder works from file:// and under any path prefix without a fetch.
+ * The site-wide search data, made at build time and shipped as a classic
+ * script (assets/search-index.js) that sets one global, so the finder works
+ * from file:// and under any path prefix without a fetch.
  *
- * It is compact by design: species, levels and lines are listed once with
- * their normalized search keys; sublevel rows (mJ, F, F·mF) and Zeeman
- * components are not listed as documents but as the quantum numbers that
- * name them (J, the F values, the (mu, ml) pairs), and the finder expands
- * them into rows and builds the same anchors as src/site/anchors.ts. The
- * test test/site/searchIndex.test.ts checks that every expanded anchor is a
- * row id of the built pages and every row id is reachable.
+ * It is compact by design. Species, levels, lines and constants are listed
+ * once with their normalized search keys (searchNormalize.ts and the word
+ * tables of searchWords.ts). What there are many of is not listed as
+ * documents but as the numbers that name it, and the finder
+ * (src/browser/finderCore.ts) expands them into rows with the anchors of
+ * src/site/anchors.ts:
+ *  - sublevels (mJ, F, (F, mF)) and the rows of the energies tables from J and the F values;
+ *  - Zeeman components from their (mu, ml) pairs;
+ *  - sublevel transitions from flat (F, mF, F′, mF′, kind) tuples, with their field-insensitive points.
+ * The answers a result line shows are here too: gJ and gF as the tables
+ * show them, the shift per unit m in Hz/T (the finder multiplies by m and
+ * converts it exactly into the reader's unit), each line's pattern, each
+ * field-insensitive field, each constant's value.
+ *
+ * Each species' part is made while that species is built (speciesBuild.ts)
+ * and the parts are merged by the build (build.ts). The test
+ * test/site/searchIndex.test.ts checks that every expanded anchor is a row
+ * id of the built pages and every row id of those kinds is reachable.
  */
-import type { Dec } from "../physics/decimal.js";
-import { htmlFile, linePagePath } from "./pageUrls.js";
+import { exportText, type Dec } from "../physics/decimal.js";
+import { formatNumber, partsText, termText, writtenParts } from "./format.js";
+import { htmlFile, levelPagePath, linePagePath, speciesPath } from "./pageUrls.js";
 import { searchTokens, termKeys } from "./searchNormalize.js";
+import { ELEMENT_NAMES, GROUND_WORDS, elementOf } from "./searchWords.js";
+import type { Table } from "./table.js";
 
-/** The parts of the atlas the search reads (an Atlas satisfies it). */
-export interface SearchSource {
-  species: {
-    id: string;
-    label: string;
-    url: string;
-    result: {
-      levels: { input: { id: string; term: { text: string } }; J2: number; hyperfine: { F2: number }[] }[];
-      lines: {
-        input: { id: string; upper: string; lower: string; wavelength: { si: Dec } | null; multipole: string };
-        components: { mu2: number; ml2: number }[];
-      }[];
-    };
-  }[];
+/** Significant digits of gJ and gF in result lines (as the sublevel tables show them). */
+const G_DIGITS = 9;
+/** Significant digits of the shift per unit m carried for the finder: far beyond the 9 shown, so its rounding is the table's. */
+const PER_M_DIGITS = 25;
+
+/** A sublevel transition as the search needs it. */
+export interface SearchTransition {
+  lower: { F2: number; mF2: number };
+  upper: { F2: number; mF2: number };
+  kind: "magnetic-dipole" | "two-photon";
+  /** Field-insensitive points: field in tesla and as the table writes it ("3.228 917 G"). */
+  fieldInsensitive: { tesla: Dec; text: string }[];
 }
 
-/** [id, label, page url from the site root, search keys] */
+/** The parts of one species the search reads (made from its results in speciesBuild.ts). */
+export interface SearchSpecies {
+  id: string;
+  label: string;
+  /** μB/h in Hz/T of the constants edition, for the shift per unit m. */
+  muB_h: Dec;
+  levels: {
+    input: { id: string; term: { text: string; multiplicity: number; letter: string; parity: "odd" | null; J2: number }; energy?: { si: Dec } | null; gJ?: { text: string } | null };
+    J2: number;
+    gJ: Dec | null;
+    /** A measured gJ is shown as written (its own digits and uncertainty), as the levels table shows it. */
+    gJFrom?: "measured" | "LS" | "none";
+    hyperfine: { F2: number; gF: Dec | null }[];
+  }[];
+  lines: {
+    input: { id: string; upper: string; lower: string; wavelength: { si: Dec } | null; multipole: string };
+    components: { mu2: number; ml2: number }[];
+    pattern: string | null;
+  }[];
+  /** The levels with a page of their own, each with its sublevel transitions and the page that lists them (the level page, or its transitions page when split). */
+  levelPages?: Map<string, { transitions: SearchTransition[]; transitionsPage: string }>;
+}
+
+/** [id, label, overview page from the site root, search keys] */
 export type SpeciesDoc = [string, string, string, string];
-/** [species index, id, term as written, id keys, term keys, doubled J, doubled F values] */
-export type LevelDoc = [number, string, string, string, string, number, number[]];
-/** [species index, id, upper level index, lower level index, vacuum λ in nm or "", multipole, id keys, flat (mu2, ml2) pairs, line page from the site root] */
-export type LineDoc = [number, string, number, number, string, string, string, number[], string];
+/**
+ * [species index, id, term typeset, id keys, term keys, doubled J, doubled F values,
+ *  gJ shown, gJ·μB/h (Hz/T) or "", gF shown per F, gF·μB/h per F (Hz/T) or "",
+ *  level page or "", transitions page or "", transitions as flat (F2, mF2, F2′, mF2′, kind) with kind 0 = M1, 1 = two-photon,
+ *  field-insensitive points as [transition index, tesla, text]]
+ */
+export type LevelDoc = [number, string, string, string, string, number, number[], string, string, string[], string[], string, string, number[], [number, string, string][]];
+/** [species index, id, upper level index, lower level index, vacuum λ in nm or "", multipole, id keys, flat (mu2, ml2) pairs, line page from the site root, pattern or ""] */
+export type LineDoc = [number, string, number, number, string, string, string, number[], string, string];
+/** [constants page and anchor from the site root, symbol, name, value as shown, unit as shown] */
+export type ConstantDoc = [string, string, string, string, string];
 
 export interface SearchData {
   /** Format version; the finder refuses others. */
-  v: 1;
+  v: 2;
+  /** The configured bias fields [text, tesla]; field i is the column "E{i}" of the energies tables. */
+  fields: [string, string][];
   species: SpeciesDoc[];
   levels: LevelDoc[];
   lines: LineDoc[];
+  constants: ConstantDoc[];
 }
+
+/** The page of the constants, from the site root. */
+export const CONSTANTS_PAGE = "constants/index.html";
 
 const unique = (xs: string[]) => [...new Set(xs.filter(Boolean))].join(" ");
 
@@ -54,51 +102,120 @@ function idKeys(id: string): string {
   return unique([...whole, ...whole.flatMap((t) => (t.includes("-") ? t.split("-") : []))]);
 }
 
+/**
+ * Keys of a species: its id and label, the label with the mass number
+ * moved ("87Rb" → "rb87", "rb-87", "rb"; "40Ca+" → "ca40+", "ca+"), and the
+ * element's names with and without the mass number ("rubidium",
+ * "rubidium-87"; "caesium", "cesium").
+ */
 function speciesKeys(id: string, label: string): string {
   const l = searchTokens(label);
-  // "87Rb" is also found as "rb" and "rb87"; "40Ca+" as "ca+" and "ca40+".
   const moved = l.map((t) => t.replace(/^(\d+)([a-z]+)(.*)$/, "$2$1$3"));
+  const dashed = l.map((t) => t.replace(/^(\d+)([a-z]+)(.*)$/, "$2-$1$3"));
   const bare = l.map((t) => t.replace(/^\d+/, ""));
-  return unique([...idKeys(id).split(" "), ...l, ...moved, ...bare]);
-}
-
-/** The search data of a site. Pure: the same atlas gives the same data. */
-export function searchData(atlas: SearchSource): SearchData {
-  const species: SpeciesDoc[] = [];
-  const levels: LevelDoc[] = [];
-  const lines: LineDoc[] = [];
-  atlas.species.forEach((s, si) => {
-    species.push([s.id, s.label, `${s.url}index.html`, speciesKeys(s.id, s.label)]);
-    const levelIndex = new Map<string, number>();
-    for (const l of s.result.levels) {
-      levelIndex.set(l.input.id, levels.length);
-      levels.push([si, l.input.id, l.input.term.text, idKeys(l.input.id), unique(termKeys(l.input.term.text)), l.J2, l.hyperfine.map((h) => h.F2)]);
-    }
-    for (const ln of s.result.lines) {
-      const wl = ln.input.wavelength ? ln.input.wavelength.si.mul("1e9").toSignificantDigits(12).toFixed() : "";
-      lines.push([
-        si,
-        ln.input.id,
-        levelIndex.get(ln.input.upper) ?? -1,
-        levelIndex.get(ln.input.lower) ?? -1,
-        wl,
-        ln.input.multipole,
-        idKeys(ln.input.id),
-        ln.components.flatMap((c) => [c.mu2, c.ml2]),
-        htmlFile(linePagePath(s.id, ln.input.id)),
-      ]);
-    }
-  });
-  return { v: 1, species, levels, lines };
+  const element = elementOf(label);
+  const mass = /\d+/.exec(label)?.[0];
+  const names = element ? ELEMENT_NAMES[element]!.flatMap((n) => [n, ...(mass ? [`${n}-${mass}`, `${n}${mass}`] : [])]) : [];
+  const ion = /\+|\bII\b|ion\b/.test(label) || /-ion$/.test(id) ? ["ion"] : [];
+  return unique([...idKeys(id).split(" "), ...l, ...moved, ...dashed, ...bare, ...names, ...ion]);
 }
 
 /**
- * The search data of several sites built one species at a time, as one:
- * species and level indices of each part shifted past the parts before it.
+ * The ground levels of a species, for the word "ground": a level listed with
+ * energy 0; else, when some levels have energies (measured from the ground
+ * level), those without one that are the upper level of no line.
  */
-export function mergeSearchData(parts: Iterable<SearchData>): SearchData {
-  const out: SearchData = { v: 1, species: [], levels: [], lines: [] };
+function groundLevels(s: SearchSpecies): Set<string> {
+  const zero = s.levels.filter((l) => l.input.energy?.si.isZero());
+  if (zero.length) return new Set(zero.map((l) => l.input.id));
+  if (!s.levels.some((l) => l.input.energy)) return new Set();
+  const uppers = new Set(s.lines.map((ln) => ln.input.upper));
+  return new Set(s.levels.filter((l) => !l.input.energy && !uppers.has(l.input.id)).map((l) => l.input.id));
+}
+
+const shown = (g: Dec | null) => (g === null ? "" : formatNumber(g, G_DIGITS));
+function gJShown(l: SearchSpecies["levels"][number]): string {
+  const written = l.gJFrom === "measured" && l.input.gJ ? writtenParts(l.input.gJ.text) : null;
+  return written ? partsText(written) : shown(l.gJ);
+}
+const perM = (g: Dec | null, muB_h: Dec) => (g === null ? "" : exportText(muB_h.mul(g), PER_M_DIGITS));
+
+/** One species' part of the search data. Pure: the same species gives the same data. */
+export function searchData(s: SearchSpecies, fields: { text: string; tesla: string }[]): SearchData {
+  const levels: LevelDoc[] = [];
+  const lines: LineDoc[] = [];
+  const levelIndex = new Map<string, number>();
+  const ground = groundLevels(s);
+  for (const l of s.levels) {
+    levelIndex.set(l.input.id, levels.length);
+    const page = s.levelPages?.get(l.input.id);
+    const flat: number[] = [];
+    const points: [number, string, string][] = [];
+    (page?.transitions ?? []).forEach((t, k) => {
+      flat.push(t.lower.F2, t.lower.mF2, t.upper.F2, t.upper.mF2, t.kind === "two-photon" ? 1 : 0);
+      for (const p of t.fieldInsensitive) points.push([k, exportText(p.tesla, 12), p.text]);
+    });
+    const levelPage = page ? htmlFile(levelPagePath(s.id, l.input.id)) : "";
+    levels.push([
+      0,
+      l.input.id,
+      termText(l.input.term),
+      ground.has(l.input.id) ? unique([...idKeys(l.input.id).split(" "), ...GROUND_WORDS]) : idKeys(l.input.id),
+      unique(termKeys(l.input.term.text)),
+      l.J2,
+      l.hyperfine.map((h) => h.F2),
+      gJShown(l),
+      perM(l.gJ, s.muB_h),
+      l.hyperfine.map((h) => shown(h.gF)),
+      l.hyperfine.map((h) => perM(h.gF, s.muB_h)),
+      levelPage,
+      page && page.transitionsPage !== levelPage ? page.transitionsPage : "",
+      flat,
+      points,
+    ]);
+  }
+  for (const ln of s.lines) {
+    const wl = ln.input.wavelength ? ln.input.wavelength.si.mul("1e9").toSignificantDigits(12).toFixed() : "";
+    lines.push([
+      0,
+      ln.input.id,
+      levelIndex.get(ln.input.upper) ?? -1,
+      levelIndex.get(ln.input.lower) ?? -1,
+      wl,
+      ln.input.multipole,
+      idKeys(ln.input.id),
+      ln.components.flatMap((c) => [c.mu2, c.ml2]),
+      htmlFile(linePagePath(s.id, ln.input.id)),
+      ln.pattern ?? "",
+    ]);
+  }
+  return {
+    v: 2,
+    fields: fields.map((f) => [f.text, f.tesla]),
+    species: [[s.id, s.label, htmlFile(speciesPath(s.id)), speciesKeys(s.id, s.label)]],
+    levels,
+    lines,
+    constants: [],
+  };
+}
+
+/** The constants of the constants page's table (siteSummary.ts), for the finder. */
+export function constantsSearch(table: Table): ConstantDoc[] {
+  const col = (key: string) => table.columns.findIndex((c) => c.key === key);
+  const [symbol, name, value, unit] = [col("symbol"), col("name"), col("value"), col("unit")];
+  const text = (cells: Table["rows"][number]["cells"], i: number) => (i >= 0 ? (cells[i]?.text ?? "") : "");
+  return table.rows.map((r) => [`${CONSTANTS_PAGE}#${r.anchor}`, text(r.cells, symbol), text(r.cells, name), text(r.cells, value), text(r.cells, unit)]);
+}
+
+/**
+ * The search data of several species built one at a time, as one: species
+ * and level indices of each part shifted past the parts before it; the
+ * fields of the first part (every part has the build's fields); constants added.
+ */
+export function mergeSearchData(parts: Iterable<SearchData>, constants: ConstantDoc[] = []): SearchData {
+  const out: SearchData = { v: 2, fields: [], species: [], levels: [], lines: [], constants };
   for (const p of parts) {
+    if (out.species.length === 0) out.fields = p.fields;
     const si = out.species.length;
     const li = out.levels.length;
     out.species.push(...p.species);

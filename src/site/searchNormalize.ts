@@ -1,23 +1,17 @@
 /**
  * One spelling for what a reader types and what the search index holds, so
  * that "2P3/2", "2P_{3/2}", "²P₃/₂", "2P°3/2" and "2Po3/2" all become the
- * token "2p3/2", and "mF = −1" becomes "mf=-1".
- *
- * The finder script (templates/assets/finder.js) carries a copy of this
- * logic for the query side; test/site/searchNormalize.test.ts runs both on
- * the same inputs and requires identical tokens. Change both together.
+ * token "2p3/2", "mF = −1" becomes "mf=-1", "Δm = +1" becomes "dm=1" and
+ * "sigma plus" becomes "σ+". The build (search index) and the finder
+ * script (src/browser/finderCore.ts, bundled) both call this module; the
+ * word tables are in searchWords.ts.
  */
-
-const SCRIPT_DIGITS: Record<string, string> = {
-  "⁰": "0", "¹": "1", "²": "2", "³": "3", "⁴": "4", "⁵": "5", "⁶": "6", "⁷": "7", "⁸": "8", "⁹": "9",
-  "₀": "0", "₁": "1", "₂": "2", "₃": "3", "₄": "4", "₅": "5", "₆": "6", "₇": "7", "₈": "8", "₉": "9",
-  "⁺": "+", "₊": "+", "⁻": "-", "₋": "-", "\u2212": "-", "⁄": "/", "½": "1/2", "°": "o",
-};
+import { PHRASES, SCRIPT_DIGITS } from "./searchWords.js";
 
 // Orbital letters of term symbols (J is skipped by convention), lower case.
 const TERM = /^(\d*)([spdfghiklmnoqrtuvwxyz])o?(\d+(?:\/2)?)$/;
-// Quantum-number assignments a reader may type; "m" alone means mJ or mF.
-const ASSIGN = /^(mf|mj|mu|ml|m|f|j)=([+-]?)(\d+(?:\/2|\.5|\.0)?)$/;
+// Quantum-number assignments a reader may type; "m" alone means mJ or mF; "dm" is Δm of a component.
+const ASSIGN = /^(mf|mj|mu|ml|m|f|j|dm)=([+-]?)(\d+(?:\/2|\.5|\.0)?)$/;
 
 function halves(text: string): string {
   if (text.endsWith(".5")) return `${Number(text.slice(0, -2)) * 2 + 1}/2`;
@@ -43,14 +37,15 @@ function token(t: string): string {
 
 /**
  * Search tokens of a text: script digits folded, TeX braces dropped, lower
- * case, split on spaces, commas and semicolons, each token canonical.
+ * case, two-word phrases joined, split on spaces, commas and semicolons,
+ * each token canonical.
  * Example: searchTokens("²P°_{3/2}  F = 2, mF=+1") → ["2p3/2", "f=2", "mf=1"].
  */
 export function searchTokens(text: string): string[] {
   const folded = [...text].map((ch) => SCRIPT_DIGITS[ch] ?? ch).join("");
-  return folded
-    .replace(/[_{}^]/g, "")
-    .toLowerCase()
+  let s = folded.replace(/[_{}^]/g, "").toLowerCase();
+  for (const [re, to] of PHRASES) s = s.replace(re, to);
+  return s
     .replace(/(\d)[\u2009\u202f](?=\d)/g, "$1")
     .replace(/\s*=\s*/g, "=")
     .split(/[\s,;]+/)

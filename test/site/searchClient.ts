@@ -4,26 +4,27 @@
  * bundled from src/browser/ exactly as the build bundles them
  * (src/build/bundleBrowser.ts), once per test process.
  */
-import { existsSync, readFileSync } from "node:fs";
+import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import vm from "node:vm";
 import { bundleBrowser } from "../../src/build/bundleBrowser.js";
-import { ROOT, tempDir } from "../support/runBuild.js";
+import { tempDir } from "../support/runBuild.js";
 
 export interface FinderRow {
   kind: string;
   href: string;
   label: string;
+  answer?: string;
+  column?: string;
 }
 
 export interface ClientGlobal {
-  MiniSearch: unknown;
   AtlasSearchData: unknown;
   AtlasFinder: {
     searchTokens(text: string): string[];
-    parseQuery(text: string): { words: string[]; qn: Record<string, number>; hasQn: boolean };
-    createFinder(data: unknown, miniSearch: unknown): {
-      search(text: string, limit?: number): { rows: FinderRow[]; total: number; capped?: boolean };
+    parseQuery(text: string): { words: string[]; states: Record<string, number>[]; dm: number[] | null; field: { tesla: string } | null; transitions: string[] };
+    createFinder(data: unknown): {
+      search(text: string, limit?: number, options?: { unit?: string }): { rows: FinderRow[]; total: number; capped?: boolean };
       all(): FinderRow[];
     };
   };
@@ -49,8 +50,5 @@ export function ASSET(name: string): string {
     bundled = tempDir("atlas-bundle-");
     bundleBrowser(bundled);
   }
-  const out = join(bundled, "assets", name);
-  // Scripts not yet moved to src/browser/ are still read from templates/assets/.
-  return existsSync(out) ? out : join(ROOT, "templates/assets", name);
+  return join(bundled, "assets", name);
 }
-export const MINISEARCH = join(ROOT, "node_modules/minisearch/dist/umd/index.js");

@@ -1,17 +1,11 @@
 import { describe, expect, it } from "vitest";
 import { searchTokens, termKeys } from "../../src/site/searchNormalize.js";
-import { ASSET, clientContext } from "./searchClient.js";
+import { ELEMENT_NAMES, FIELD_UNITS, POLARIZATION_WORDS, elementOf } from "../../src/site/searchWords.js";
 
 // Spellings of one term symbol a reader may type (common practice: plain, TeX, Unicode
 // super/subscripts, the degree sign or a letter o for odd parity, and no multiplicity).
 const SPELLINGS_2P3_2 = ["2P3/2", "2P_{3/2}", "²P₃/₂", "2P°3/2", "2Po3/2", "2P^o_{3/2}", "²P°₃/₂", "2p3/2", "2P₃⁄₂"];
 
-const INPUTS = [
-  ...SPELLINGS_2P3_2,
-  "P3/2", "3P2", "3Po2", "³P°₂", "1S0", "5D4", "e5D2", "5s-S1/2", "5p-P°3/2", "6s6p-3P1",
-  "F=2", "F = 2", "f=2", "mF=-1", "mF = −1", "mF=+1", "mF=−0", "F=2 mF=1", "F=2, mF=+1", "F=1.5", "mJ=-1/2", "m=1/2", "mu=3/2 ml=1/2",
-  "729", "780.24", "780.241\u2009209", "D2", "rb87 D2", "87Rb", "40Ca+", "ca40-ion", "  D2  ", "", "σ+", "hg202 546",
-];
 
 describe("search normalization", () => {
   it("gives every common spelling of ²P°3/2 the same token", () => {
@@ -42,8 +36,62 @@ describe("search normalization", () => {
     expect(searchTokens("729")).toEqual(["729"]);
   });
 
-  it("agrees token for token with the copy in the finder script", () => {
-    const client = clientContext([ASSET("finder.js")]);
-    for (const s of INPUTS) expect([...client.AtlasFinder.searchTokens(s)], JSON.stringify(s)).toEqual(searchTokens(s));
+  it("reads polarization words, Δm and two-word phrases into one token each", () => {
+    // Spellings of the polarizations (common practice: π, σ+, σ−; "sigma plus"; Δm written Δm, dm or delta m).
+    expect(searchTokens("D2 σ+")).toEqual(["d2", "σ+"]);
+    expect(searchTokens("D2 σ−")).toEqual(["d2", "σ-"]);
+    expect(searchTokens("D2 sigma plus")).toEqual(["d2", "σ+"]);
+    expect(searchTokens("D2 Sigma-Minus")).toEqual(["d2", "σ-"]);
+    expect(searchTokens("Δm = +1")).toEqual(["dm=1"]);
+    expect(searchTokens("delta m=-1")).toEqual(["dm=-1"]);
+    expect(searchTokens("dm=0")).toEqual(["dm=0"]);
+    expect(searchTokens("field insensitive")).toEqual(["field-insensitive"]);
+    expect(searchTokens("two photon")).toEqual(["two-photon"]);
+    expect(searchTokens("Rb clock transition")).toEqual(["rb", "clock"]);
+    expect(searchTokens("0–0")).toEqual(["0-0"]);
+    // Words that only contain a phrase's letters are left alone.
+    expect(searchTokens("sigmaplusx twophotons")).toEqual(["sigmaplusx", "twophotons"]);
+  });
+
+  it("keeps the spellings of species as one token each", () => {
+    expect(searchTokens("Rb-87")).toEqual(["rb-87"]);
+    expect(searchTokens("87Rb")).toEqual(["87rb"]);
+    expect(searchTokens("40Ca+")).toEqual(["40ca+"]);
+    expect(searchTokens("caesium")).toEqual(["caesium"]);
+  });
+});
+
+describe("word tables", () => {
+  it("names elements by symbol with their common spellings", () => {
+    // IUPAC names; American "cesium" and "aluminum", British "sulphur" (common practice).
+    expect(ELEMENT_NAMES.rb).toEqual(["rubidium"]);
+    expect(ELEMENT_NAMES.cs).toEqual(["caesium", "cesium"]);
+    expect(ELEMENT_NAMES.al).toEqual(["aluminium", "aluminum"]);
+    expect(ELEMENT_NAMES.s).toEqual(["sulfur", "sulphur"]);
+    expect(ELEMENT_NAMES.hg).toEqual(["mercury"]);
+    // 118 elements, hydrogen to oganesson (IUPAC periodic table, from memory).
+    expect(Object.keys(ELEMENT_NAMES).length).toBe(118);
+    expect(elementOf("87Rb")).toBe("rb");
+    expect(elementOf("40Ca+")).toBe("ca");
+    expect(elementOf("Fe I")).toBe("fe");
+    expect(elementOf("133Cs")).toBe("cs");
+  });
+
+  it("gives polarization words the Δm they name (m_upper − m_lower)", () => {
+    // σ+ for Δm = +1, π for 0, σ− for −1 (common practice; the export's polarization field uses the same sign).
+    expect(POLARIZATION_WORDS["σ+"]).toEqual([1]);
+    expect(POLARIZATION_WORDS["sigma-"]).toEqual([-1]);
+    expect(POLARIZATION_WORDS.pi).toEqual([0]);
+    expect(POLARIZATION_WORDS.sigma).toEqual([1, -1]);
+  });
+
+  it("reads field units as the unit table has them", () => {
+    // 1 G = 1e-4 T exactly (SI Brochure, non-SI units); lower case as typed.
+    expect(FIELD_UNITS.g).toBe("G");
+    expect(FIELD_UNITS.t).toBe("T");
+    expect(FIELD_UNITS.mt).toBe("mT");
+    expect(FIELD_UNITS.kg).toBe("kG");
+    expect(FIELD_UNITS["µt"]).toBe("µT");
+    expect(FIELD_UNITS["μt"]).toBe("µT");
   });
 });
