@@ -73,7 +73,7 @@ function tablesOf(view: PageView): Table[] {
     case "transitions":
       return [view.transitions];
     case "line":
-      return [view.components, ...(view.hyperfine ? [view.hyperfine, view.hyperfineComponents!] : []), ...(view.atFields ?? []).flatMap((a) => (a.table ? [a.table] : []))];
+      return [view.components, ...(view.hyperfine ? [view.hyperfine, view.hyperfineComponents!] : []), ...(view.lock ? [view.lock.table] : []), ...(view.atFields ?? []).flatMap((a) => (a.table ? [a.table] : []))];
     case "line-field":
       return view.atField.table ? [view.atField.table] : [];
   }

@@ -51,6 +51,16 @@ export const hyperfineGroupAnchor = (lineId: string, Fu2: number, Fl2: number) =
 /** A hyperfine Zeeman component (F, mF) → (F′, mF′) of a line. */
 export const hyperfineComponentAnchor = (lineId: string, Fu2: number, mFu2: number, Fl2: number, mFl2: number) =>
   `hfc:${lineId}:F=${formatDoubled(Fu2)},mF=${formatDoubled(mFu2)}-to-F=${formatDoubled(Fl2)},mF=${formatDoubled(mFl2)}`;
+/** The section of a line's lock points (line page). */
+export const lineLockAnchor = (lineId: string) => `line:${lineId}-lock-points`;
+/**
+ * A lock point of a line, lower level first as the absorption is read:
+ * lock:D2:F=2-to-F=3 (the transition F = 2 → F′ = 3), lock:D2:F=2-to-F=2,3
+ * (the crossover of F′ = 2 and 3 from F = 2), lock:D2:F=1,2-to-F=2 (the
+ * crossover of F = 1 and 2 to F′ = 2). The F values (doubled) are ascending.
+ */
+export const lockPointAnchor = (lineId: string, Fl2: readonly number[], Fu2: readonly number[]) =>
+  `lock:${lineId}:F=${Fl2.map(formatDoubled).join(",")}-to-F=${Fu2.map(formatDoubled).join(",")}`;
 /** A fine-structure term ("5p 2P°" → "5p-2Po") and its states. */
 export const termKey = (key: string) => key.replace(/\s+/g, "-").replace(/°/g, "o");
 export const termAnchor = (key: string) => `term:${termKey(key)}`;

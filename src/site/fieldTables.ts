@@ -28,6 +28,8 @@ import { stickPlotSvg } from "./plots/stickPlot.js";
 import { csvName, safeFile, type TableHome } from "./linearTables.js";
 import { fractionCell, numberCell, quantumCell, textCell, type Table } from "./table.js";
 import { makeTable } from "./tableSpec.js";
+import { frequencyCell, wavelengthCell } from "./lockTables.js";
+import { absoluteFrequency } from "../physics/lockPoints.js";
 
 const MHZ = new Dec("1e6");
 const GAUSS = new Dec("1e-4");
@@ -201,6 +203,7 @@ export { termAnchor };
 /** Hyperfine lines F → F′ of a line at low field. */
 export function hyperfineGroupsTable(ln: LineResult, groups: HyperfineLineGroup[], home: TableHome): Table {
   const id = ln.input.id;
+  const nu0 = ln.frequencyHz;
   return makeTable<HyperfineLineGroup>(
     {
       id: `hfl:${id}`,
@@ -214,6 +217,8 @@ export function hyperfineGroupsTable(ln: LineResult, groups: HyperfineLineGroup[
         { key: "S", label: "strength (of line)", kind: "fraction", cell: (g) => fractionCell(g.strength) },
         { key: "Sl", label: "share of lower F", kind: "fraction", cell: (g) => fractionCell(g.shareOfLower) },
         { key: "off", label: "offset from line centre", unit: "MHz", kind: "number", cell: (g) => numberCell(g.offset.div(MHZ), 10) },
+        { key: "nu", label: "frequency", unit: "THz", kind: "number", when: nu0 !== null, cell: (g) => frequencyCell(absoluteFrequency(nu0!, g.offset)) },
+        { key: "lambda", label: "vacuum wavelength", unit: "nm", kind: "number", when: nu0 !== null, cell: (g) => wavelengthCell(absoluteFrequency(nu0!, g.offset)) },
         { key: "gFu", label: "gF upper", kind: "number", cell: (g) => numberCell(g.gFu, 9) },
         { key: "gFl", label: "gF lower", kind: "number", cell: (g) => numberCell(g.gFl, 9) },
       ],
@@ -266,6 +271,7 @@ export function atFieldTable(ln: LineResult, a: LineAtFieldResult, home: TableHo
         { key: "pol", label: "polarization", kind: "text", cell: (c) => textCell(polarizationSymbol(c.polarization, c.q)) },
         { key: "strength", label: "relative strength", kind: "number", cell: (c) => numberCell(c.strength, 6) },
         { key: "shift", label: "shift from line centre", unit: "MHz", kind: "number", cell: (c) => numberCell(c.shiftHz.div(MHZ), 10) },
+        { key: "nu", label: "frequency", unit: "THz", kind: "number", when: ln.frequencyHz !== null, cell: (c) => frequencyCell(absoluteFrequency(ln.frequencyHz!, c.shiftHz)) },
         {
           key: "dl", label: "wavelength shift", unit: "pm", kind: "number",
           cell: (c) => numberCell(wavelength && ln.frequencyHz ? c.shiftHz.neg().mul(wavelength.si).div(ln.frequencyHz).mul("1e12") : null, 6),

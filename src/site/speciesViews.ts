@@ -54,6 +54,7 @@ import {
 } from "./linearTables.js";
 import { exportPath, levelPagePath, lineFieldPagePath, linePagePath, sheetPath, speciesPath } from "./pageUrls.js";
 import { patternSketchSvg } from "./plots/patternSketch.js";
+import { lockView, type LockView } from "./lockTables.js";
 import { termParts, type Cell, type Table, type TermParts } from "./table.js";
 
 /** One step of the breadcrumb trail; the last has no link. */
@@ -120,8 +121,10 @@ export interface AtFieldView {
   regime: string;
   model: string;
   plot: string;
-  /** Null where the components sit at their linear shifts (the J-resolved table says it all). */
+  /** Null where the components sit at their linear shifts and the line has no wavelength (the J-resolved table says it all). */
   table: Table | null;
+  /** The components sit at their linear shifts (J-resolved linear pattern). */
+  linear: boolean;
 }
 
 export interface LineView extends PageCommon {
@@ -135,6 +138,8 @@ export interface LineView extends PageCommon {
   fieldsAnchor: string;
   hyperfine: Table | null;
   hyperfineComponents: Table | null;
+  /** Saturated-absorption lock points with the reference choice; null without hyperfine groups or without a wavelength. */
+  lock: LockView | null;
   /** The line at each bias field, on this page; or null when they have pages of their own (fieldLinks). */
   atFields: AtFieldView[] | null;
   fieldLinks: { text: string; url: string; regime: string; model: string }[];
@@ -286,7 +291,9 @@ function atFieldView(ln: LineResult, a: LineAtFieldResult, home: TableHome): AtF
     regime: a.regime,
     model: a.model,
     plot: atFieldPlot(ln, a),
-    table: a.model === "J-resolved linear pattern" ? null : atFieldTable(ln, a, home),
+    // the linear pattern gets a table too when the line has a wavelength: its absolute frequencies
+    table: a.model === "J-resolved linear pattern" && ln.frequencyHz === null ? null : atFieldTable(ln, a, home),
+    linear: a.model === "J-resolved linear pattern",
   };
 }
 
@@ -327,6 +334,7 @@ export function lineViews(v: SpeciesViewsInput, split: (lineId: string) => boole
       fieldsAnchor: lineFieldsAnchor(ln.input.id),
       hyperfine: f.hyperfine ? hyperfineGroupsTable(ln, f.hyperfine, home) : null,
       hyperfineComponents: f.hyperfine ? hyperfineComponentsTable(ln, f.hyperfine, home) : null,
+      lock: lockView(ln, f.hyperfine, home),
       atFields: separate ? null : atFields,
       fieldLinks: separate
         ? positive.map((a) => ({ text: a.field.text, url: `/${lineFieldPagePath(id, ln.input.id, exportText(a.field.tesla, 30))}`, regime: a.regime, model: a.model }))

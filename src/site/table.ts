@@ -41,6 +41,8 @@ export interface Cell {
   parts?: NumberParts;
   /** Exact Hz/T value for unit switching. */
   hzPerT?: string;
+  /** Exact absolute frequency (Hz) of the row, from which the page script recomputes an offset (the lock-point tables' data-hz). */
+  hz?: string;
   /** Exact fraction as data ("-4/3", ASCII minus), e.g. for the CSV. */
   exact?: string;
   /** The exact fraction as shown before its decimal ("−4/3"), and "=" or "≈" between them. */

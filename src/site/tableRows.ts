@@ -46,7 +46,7 @@ export function tableRowsHtml(t: Table): string {
       const col = t.columns[i];
       if (!col) return;
       const key = sortKey(c, col.kind);
-      row += `<td class="k-${e(col.kind)}"${key === false ? "" : ` data-sort="${e(key)}"`}${c.hzPerT ? ` data-hz-per-t="${e(c.hzPerT)}"` : ""}>${cellHtml(c, col)}</td>`;
+      row += `<td class="k-${e(col.kind)}"${key === false ? "" : ` data-sort="${e(key)}"`}${c.hzPerT ? ` data-hz-per-t="${e(c.hzPerT)}"` : ""}${c.hz ? ` data-hz="${e(c.hz)}"` : ""}>${cellHtml(c, col)}</td>`;
     });
     row += `<td class="k-link"><a class="row-link" href="#${anchor}" aria-label="Link to this row">#</a></td>\n</tr>`;
     out.push(row);

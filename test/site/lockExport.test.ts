@@ -123,7 +123,7 @@ describe("lock points", () => {
     const below = f((p) => p.kind === "transition" && p.F_lower === "2" && p.F_upper === "3").sub(f((p) => p.kind === "crossover" && p.F_lower === "2" && String(p.F_upper) === "2,3")).div(MHZ);
     // from memory: Steck, "Rubidium 87 D Line Data": the crossover lies 133.3 MHz below the cycling transition
     expect(below.sub("133.3").abs().lt("0.05")).toBe(true);
-    for (let i = 1; i < lp.length; i++) expect(dec(lp[i].frequency_Hz).gte(lp[i - 1].frequency_Hz)).toBe(true);
+    for (let i = 1; i < lp.length; i++) expect(dec(lp[i]!.frequency_Hz).gte(lp[i - 1]!.frequency_Hz)).toBe(true);
   });
 
   it("keep their offsets from the line centre without a wavelength", () => {
