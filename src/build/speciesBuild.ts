@@ -19,7 +19,7 @@ import { fieldText } from "../site/fieldTables.js";
 import { sheetAddress, speciesSheet, type SpeciesSheet } from "../site/sheet.js";
 import { scanIds } from "../site/idScan.js";
 import type { Table } from "../site/table.js";
-import { hasLevelPage, levelViews, lineViews, overviewView, type PageView, type SpeciesViewsInput } from "../site/speciesViews.js";
+import { hasLevelPage, levelViews, lineViews, overviewView, type OverviewCompaction, type PageView, type SpeciesViewsInput } from "../site/speciesViews.js";
 import { hasPagesBelow, movedMap, movedScript, MOVED_FILE, type PageIds } from "./forwarding.js";
 import type { RenderPage } from "./renderPages.js";
 import { timed } from "./timings.js";
@@ -31,6 +31,8 @@ import { CALCULATOR_PARTIAL, writeEngineData } from "./writeEngineData.js";
  * is 500 kB; the margin is for what a later edit adds).
  */
 export const PAGE_LIMIT = 450_000;
+/** A species overview above this size leaves more to its level pages (its budget is 250 kB). */
+export const OVERVIEW_LIMIT = 235_000;
 
 /** What every page of the build shares: the frame of the layout and of the bench sheets. */
 export interface SiteFrame {
@@ -67,9 +69,16 @@ export interface SpeciesSummary {
 function tablesOf(view: PageView): Table[] {
   switch (view.kind) {
     case "overview":
-      return [view.glance, view.levels, ...view.shiftSections.flatMap((s) => s.tables), view.lines, ...view.energies.map((e) => e.table), ...view.terms.map((t) => t.table)];
+      return [
+        view.glance,
+        view.levels,
+        ...view.shiftSections.flatMap((s) => s.tables),
+        view.lines,
+        ...view.energies.flatMap((e) => (e.table ? [e.table] : [])),
+        ...view.terms.map((t) => t.table),
+      ];
     case "level":
-      return [view.energies, ...(view.transitions ? [view.transitions] : [])];
+      return [...(view.sublevelShifts ? [view.sublevelShifts] : []), view.energies, ...(view.transitions ? [view.transitions] : [])];
     case "transitions":
       return [view.transitions];
     case "line":
@@ -91,38 +100,61 @@ export function buildSpecies(input: SpeciesInput, ctx: SpeciesBuildContext): Spe
   const render = (view: PageView, movedAnchors: string | null) =>
     timed("render", () => ctx.render(`species/${view.kind}.njk`, `/${htmlFile(view.path)}`, { view, atlas, pageTitle: view.title, movedAnchors, calculatorPartial: CALCULATOR_PARTIAL }));
 
-  // Line pages first: one that is too large is rendered again with a page per field.
   const keep = (view: PageView, html: string) => {
     rendered.push({ view, html });
     for (const t of tablesOf(view)) if (t.csvPath) csv.set(t.csvPath, tableCsv(t));
   };
-  const whole = timed("views", () => lineViews(v, () => false));
-  const tooLarge = new Set<string>();
-  for (const line of whole.lines) {
-    const html = render(line, null);
-    if (Buffer.byteLength(html) > PAGE_LIMIT) tooLarge.add(line.lineId);
-    else keep(line, html);
+  const tooLarge = (html: string, limit = PAGE_LIMIT) => Buffer.byteLength(html) > limit;
+  // Every species has pages below its overview (a level or a line page) when it has a line or a level with hyperfine structure.
+  const overviewMoved = input.lines.length > 0 || [...fields.levels.values()].some((f) => f.validity !== null) ? MOVED_FILE : null;
+
+  // The overview first: as much as fits its budget, the rest left to the level pages.
+  let compact: OverviewCompaction = 0;
+  let overview = timed("views", () => overviewView(v, compact));
+  let overviewHtml = render(overview, overviewMoved);
+  while (tooLarge(overviewHtml, OVERVIEW_LIMIT) && compact < 2) {
+    compact = (compact + 1) as OverviewCompaction;
+    overview = timed("views", () => overviewView(v, compact));
+    overviewHtml = render(overview, overviewMoved);
   }
-  if (tooLarge.size > 0) {
-    const split = timed("views", () => lineViews(v, (lineId) => tooLarge.has(lineId)));
-    for (const line of split.lines) if (tooLarge.has(line.lineId)) keep(line, render(line, MOVED_FILE));
-    for (const lf of split.lineFields) keep(lf, render(lf, null));
+
+  // Line pages: a page that is too large is rendered again split, first one page per
+  // bias field, then (for a field that is still too large) one page per polarization.
+  const splitLines = new Set<string>();
+  const splitFields = new Set<string>();
+  const fieldKey = (lineId: string, tesla: string) => `${lineId}\u0000${tesla}`;
+  for (;;) {
+    const views = timed("views", () => lineViews(v, (l) => splitLines.has(l), (l, t) => splitFields.has(fieldKey(l, t))));
+    const pages = [...views.lines, ...views.lineFields].map((view) => ({ view, html: render(view, null) }));
+    let again = false;
+    for (const { view, html } of pages) {
+      if (!tooLarge(html)) continue;
+      if (view.kind === "line" && !splitLines.has(view.lineId)) (splitLines.add(view.lineId), (again = true));
+      else if (view.kind === "line-field" && view.polarization === null && !splitFields.has(fieldKey(view.lineId, view.tesla))) {
+        splitFields.add(fieldKey(view.lineId, view.tesla));
+        again = true;
+      }
+    }
+    if (again) continue;
+    const below = (view: PageView) => pages.some((p) => p.view !== view && p.view.path.startsWith(view.path));
+    for (const { view, html } of pages) keep(view, below(view) ? render(view, MOVED_FILE) : html);
+    break;
   }
+
   // Level pages likewise: one that is too large gets its transitions on a page of their own.
   const bigLevels = new Set<string>();
-  for (const level of timed("views", () => levelViews(v)).levels) {
+  for (const level of timed("views", () => levelViews(v, () => false, compact)).levels) {
     const html = render(level, null);
-    if (Buffer.byteLength(html) > PAGE_LIMIT && level.transitions) bigLevels.add(level.levelId);
+    if (tooLarge(html) && level.transitions) bigLevels.add(level.levelId);
     else keep(level, html);
   }
   if (bigLevels.size > 0) {
-    const split = timed("views", () => levelViews(v, (levelId) => bigLevels.has(levelId)));
+    const split = timed("views", () => levelViews(v, (levelId) => bigLevels.has(levelId), compact));
     for (const level of split.levels) if (bigLevels.has(level.levelId)) keep(level, render(level, MOVED_FILE));
     for (const t of split.transitions) keep(t, render(t, null));
   }
-  const overview = timed("views", () => overviewView(v));
   const paths = [overview.path, ...rendered.map((r) => r.view.path)];
-  keep(overview, render(overview, hasPagesBelow(overview.path, paths) ? MOVED_FILE : null));
+  keep(overview, hasPagesBelow(overview.path, paths) === (overviewMoved !== null) ? overviewHtml : render(overview, hasPagesBelow(overview.path, paths) ? MOVED_FILE : null));
 
   // Forwarding maps, from the ids of the rendered pages.
   const ids: PageIds[] = rendered.map((r) => ({ path: r.view.path, ids: scanIds(r.html) }));

@@ -86,7 +86,7 @@ export interface OverviewView extends PageCommon {
   lines: Table;
   fieldsText: string[];
   /** Energies per level; a level without a page of its own keeps its field section's anchor here. */
-  energies: { levelId: string; levelUrl: string | null; sectionAnchor: string | null; table: Table }[];
+  energies: { levelId: string; levelUrl: string | null; sectionAnchor: string | null; table: Table | null }[];
   terms: { anchor: string; key: string; facts: string[]; table: Table }[];
   lineLinks: { lineId: string; url: string; summary: string }[];
 }
@@ -99,6 +99,8 @@ export interface LevelView extends PageCommon {
   /** Position of the level in the species (1-based): keeps the plot switch ids of the one-page layout. */
   axisIndex: number;
   facts: string[];
+  /** The (F, mF) linear shifts, here when the overview leaves them to the level page (OverviewCompaction 2). */
+  sublevelShifts: Table | null;
   energies: Table;
   plots: { linear: string; log: string } | null;
   transitions: Table | null;
@@ -150,7 +152,20 @@ export interface LineFieldView extends PageCommon {
   lineId: string;
   lineUrl: string;
   atField: AtFieldView;
+  /** When the components at this field are on pages per polarization: links to them (atField.table is then null). */
+  parts: { text: string; url: string; count: number }[];
+  /** The field, as exported ("0.0001"), and the polarization this page is for (null: all). */
+  tesla: string;
+  polarization: string | null;
 }
+
+/** The pages of one line at one field, per polarization, when the field's page would be too large. */
+const POLARIZATION_PARTS: { key: string; text: string; test: (p: string | null) => boolean }[] = [
+  { key: "pi", text: "π components", test: (p) => p === "pi" },
+  { key: "sigma-plus", text: "σ+ components", test: (p) => p === "sigma+" },
+  { key: "sigma-minus", text: "σ− components", test: (p) => p === "sigma-" },
+  { key: "dm2", text: "Δm = ±2 components", test: (p) => p === null },
+];
 
 export type PageView = OverviewView | LevelView | TransitionsView | LineView | LineFieldView;
 
@@ -170,7 +185,16 @@ const gIText = (s: SpeciesResult): string => {
 /** Levels that get a page of their own: those with hyperfine structure (field tables, plots, transitions). */
 export const hasLevelPage = (s: SpeciesFieldResult, l: LevelResult): boolean => s.levels.get(l.input.id)!.validity !== null;
 
-export function overviewView(v: SpeciesViewsInput): OverviewView {
+/**
+ * How much of a large species the overview leaves to its level pages, so the
+ * overview stays under its budget: 0 nothing; 1 the energies at the bias
+ * fields of levels that have a page; 2 also their (F, mF) shift tables. The
+ * rows keep their ids on the level pages, and the overview's forwarding map
+ * sends old links there.
+ */
+export type OverviewCompaction = 0 | 1 | 2;
+
+export function overviewView(v: SpeciesViewsInput, compact: OverviewCompaction = 0): OverviewView {
   const s = v.result;
   const id = s.input.id;
   const home: TableHome = { speciesId: id, csvBase: `species/${id}/csv`, exportUrl: exportPath(id) };
@@ -210,7 +234,11 @@ export function overviewView(v: SpeciesViewsInput): OverviewView {
         termParts: termParts(l.input.term),
         title: l.input.id,
         levelUrl: levelUrl(l),
-        tables: [mJTable(l, home), ...(l.hyperfine.length > 0 ? [hyperfineTable(l, home), hyperfineSublevelsTable(l, home)] : [])],
+        tables: [
+          mJTable(l, home),
+          ...(l.hyperfine.length > 0 ? [hyperfineTable(l, home)] : []),
+          ...(l.hyperfine.length > 0 && !(compact >= 2 && levelUrl(l)) ? [hyperfineSublevelsTable(l, home)] : []),
+        ],
       };
     }),
     lines: linesTable(s, home),
@@ -219,7 +247,7 @@ export function overviewView(v: SpeciesViewsInput): OverviewView {
       levelId: l.input.id,
       levelUrl: levelUrl(l),
       sectionAnchor: levelUrl(l) ? null : levelFieldSectionAnchor(l.input.id),
-      table: energiesTable(l, v.fields.levels.get(l.input.id)!, v.configured, home, false),
+      table: compact >= 1 && levelUrl(l) ? null : energiesTable(l, v.fields.levels.get(l.input.id)!, v.configured, home, false),
     })),
     terms: v.fields.terms.map((t) => ({ anchor: termAnchor(t.key), key: t.key, facts: termFacts(t), table: termTable(t, v.configured, home) })),
     lineLinks: s.lines.map((ln) => ({ lineId: ln.input.id, url: `/${linePagePath(id, ln.input.id)}`, summary: ln.summary })),
@@ -231,7 +259,11 @@ export function overviewView(v: SpeciesViewsInput): OverviewView {
  * sublevel transitions go to a page of their own (asked after rendering the
  * whole page once and finding it too large); then that page's view comes too.
  */
-export function levelViews(v: SpeciesViewsInput, split: (levelId: string) => boolean = () => false): { levels: LevelView[]; transitions: TransitionsView[] } {
+export function levelViews(
+  v: SpeciesViewsInput,
+  split: (levelId: string) => boolean = () => false,
+  compact: OverviewCompaction = 0,
+): { levels: LevelView[]; transitions: TransitionsView[] } {
   const s = v.result;
   const id = s.input.id;
   const home: TableHome = { speciesId: id, csvBase: `species/${id}/csv`, exportUrl: exportPath(id) };
@@ -259,6 +291,7 @@ export function levelViews(v: SpeciesViewsInput, split: (levelId: string) => boo
       anchor: levelFieldSectionAnchor(l.input.id),
       axisIndex: i + 1,
       facts: validityFacts(f),
+      sublevelShifts: compact >= 2 ? hyperfineSublevelsTable(l, home) : null,
       energies: energiesTable(l, f, v.configured, home, true),
       plots: levelPlots(l, f, v.configured),
       transitions: separate ? null : table,
@@ -302,7 +335,17 @@ function atFieldView(ln: LineResult, a: LineAtFieldResult, home: TableHome): AtF
  * go to pages of their own (the build asks after rendering the whole page
  * once and finding it too large); then the per-field views come too.
  */
-export function lineViews(v: SpeciesViewsInput, split: (lineId: string) => boolean): { lines: LineView[]; lineFields: LineFieldView[] } {
+/**
+ * The line pages of a species. `split(lineId)` sends a line's fields to
+ * pages of their own, and `splitField(lineId, tesla)` a field's components
+ * to pages per polarization (each asked after rendering the page once and
+ * finding it too large).
+ */
+export function lineViews(
+  v: SpeciesViewsInput,
+  split: (lineId: string) => boolean,
+  splitField: (lineId: string, tesla: string) => boolean = () => false,
+): { lines: LineView[]; lineFields: LineFieldView[] } {
   const s = v.result;
   const id = s.input.id;
   const home: TableHome = { speciesId: id, csvBase: `species/${id}/csv`, exportUrl: exportPath(id) };
@@ -342,17 +385,44 @@ export function lineViews(v: SpeciesViewsInput, split: (lineId: string) => boole
     });
     if (!separate) continue;
     positive.forEach((a, k) => {
+      const tesla = exportText(a.field.tesla, 30);
+      const path = lineFieldPagePath(id, ln.input.id, tesla);
+      const fieldCrumbs = [...crumbs, { text: ln.input.id, href: url }];
+      const common = { kind: "line-field" as const, speciesId: id, speciesLabel: s.input.label, lineId: ln.input.id, lineUrl: url };
+      const whole = atFields[k]!;
+      const byPolarization = whole.table !== null && splitField(ln.input.id, tesla);
+      const parts = byPolarization
+        ? POLARIZATION_PARTS.map((part) => ({ part, components: a.components.filter((c) => part.test(c.polarization)) })).filter((x) => x.components.length > 0)
+        : [];
       lineFields.push({
-        kind: "line-field",
-        path: lineFieldPagePath(id, ln.input.id, exportText(a.field.tesla, 30)),
+        ...common,
+        path,
         title: `${s.input.label} ${ln.input.id} at ${a.field.text}`,
-        crumbs: [...crumbs, { text: ln.input.id, href: url }, { text: a.field.text, href: null }],
-        speciesId: id,
-        speciesLabel: s.input.label,
-        lineId: ln.input.id,
-        lineUrl: url,
-        atField: atFields[k]!,
+        crumbs: [...fieldCrumbs, { text: a.field.text, href: null }],
+        atField: byPolarization ? { ...whole, table: null } : whole,
+        tesla,
+        polarization: null,
+        parts: parts.map(({ part, components }) => ({ text: part.text, url: `/${path}${part.key}/`, count: components.length })),
       });
+      for (const { part, components } of parts) {
+        const t = atFieldTable(ln, { ...a, components }, home);
+        lineFields.push({
+          ...common,
+          path: `${path}${part.key}/`,
+          title: `${s.input.label} ${ln.input.id} at ${a.field.text}, ${part.text}`,
+          crumbs: [...fieldCrumbs, { text: a.field.text, href: `/${path}` }, { text: part.text, href: null }],
+          atField: {
+            ...whole,
+            anchor: `${whole.anchor}:${part.key}`,
+            heading: `${whole.heading}, ${part.text}`,
+            plot: atFieldPlot(ln, { ...a, components }),
+            table: { ...t, id: `${t.id}:${part.key}`, csvPath: t.csvPath.replace(/\.csv$/, `-${part.key}.csv`), caption: `${t.caption}, ${part.text}` },
+          },
+          parts: [],
+          tesla,
+          polarization: part.key,
+        });
+      }
     });
   }
   return { lines, lineFields };
