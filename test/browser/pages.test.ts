@@ -40,6 +40,42 @@ describe.skipIf(!hasChromium)("pages on screens", () => {
     await ctx.close();
   }, 120_000);
 
+  it("keep every table row within three lines of text at 360 px (long text folds into notes)", async () => {
+    const ctx = await browser.newContext({ viewport: { width: 360, height: 740 } });
+    const page = await ctx.newPage();
+    for (const path of ["species/rb87/", "species/sr88/", "species/rb87/line/D2/", "constants/"]) {
+      await page.goto(server.url + path, { waitUntil: "load" });
+      const tallest = await page.evaluate(() => {
+        let worst = { id: "", lines: 0 };
+        for (const tr of document.querySelectorAll<HTMLTableRowElement>("table.atlas-table tbody tr")) {
+          const line = parseFloat(getComputedStyle(tr.cells[0]!).lineHeight) || 16;
+          const lines = (tr.getBoundingClientRect().height - 4) / line;
+          if (lines > worst.lines) worst = { id: tr.id, lines };
+        }
+        return worst;
+      });
+      expect(tallest.lines, `${path}: row ${tallest.id}`).toBeLessThanOrEqual(3);
+    }
+    await ctx.close();
+  }, 120_000);
+
+  it("show every cell whole at 1920 px: a wide table scrolls inside its box, none is cut off by the page", async () => {
+    const ctx = await browser.newContext({ viewport: { width: 1920, height: 1080 } });
+    const page = await ctx.newPage();
+    for (const path of ["species/rb87/level/5s-S1_2/", "species/cs133/level/6s-S1_2/"]) {
+      await page.goto(server.url + path, { waitUntil: "load" });
+      // The answer columns of a transitions table (states, zero-field frequency, field-insensitive field) are visible without scrolling.
+      const cut = await page.evaluate(() => {
+        const t = document.querySelector<HTMLTableElement>('table[id^="table-rf:"]')!;
+        const box = t.closest(".table-wrap")!.getBoundingClientRect();
+        const heads = Array.from(t.tHead!.rows[0]!.cells).slice(0, 4);
+        return heads.filter((th) => th.getBoundingClientRect().right > box.right + 1).map((th) => th.textContent);
+      });
+      expect(cut, path).toEqual([]);
+    }
+    await ctx.close();
+  }, 120_000);
+
   it("keep prose lines readable and the content bounded at 1920 px", async () => {
     const ctx = await browser.newContext({ viewport: { width: 1920, height: 1080 } });
     const page = await ctx.newPage();
