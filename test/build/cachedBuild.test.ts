@@ -7,19 +7,21 @@
 import { cpSync, readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { afterAll, describe, expect, it } from "vitest";
-import { DEMO_DATA, runBuild, tempDir } from "../support/runBuild.js";
+import { DEMO_DATA, tempDir } from "../support/runBuild.js";
+import { runBuildIn, snapshotCode } from "./codeSnapshot.js";
 import { treeFiles } from "../cli/treeHash.js";
 
 const parent = tempDir("atlas-cached-");
 const data = join(parent, "data");
 cpSync(DEMO_DATA, data, { recursive: true });
+const code = snapshotCode(parent);
 const n = readdirSync(join(data, "species")).filter((f) => f.endsWith(".yaml")).length;
 afterAll(() => rmSync(parent, { recursive: true, force: true }));
 
 const packs = (): string[] => readdirSync(join(parent, ".atlas-cache", "species")).filter((n) => n.endsWith(".pack"));
 
 async function build(out: string, epoch: string, env: Record<string, string> = {}): Promise<{ files: Map<string, Buffer>; stdout: string }> {
-  const r = await runBuild({ data, out: join(parent, out), env: { SOURCE_DATE_EPOCH: epoch, ...env } });
+  const r = await runBuildIn(code, { data, out: join(parent, out), env: { SOURCE_DATE_EPOCH: epoch, ...env } });
   expect(r.code, r.stderr).toBe(0);
   return { files: treeFiles(join(parent, out)), stdout: r.stdout };
 }

@@ -9,23 +9,25 @@
 import { cpSync, existsSync, readdirSync, rmSync } from "node:fs";
 import { basename, join } from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { DEMO_DATA, runBuild, tempDir, type BuildRun } from "../support/runBuild.js";
+import { DEMO_DATA, tempDir, type BuildRun } from "../support/runBuild.js";
+import { runBuildIn, snapshotCode } from "./codeSnapshot.js";
 import { treeHash } from "../cli/treeHash.js";
 
 const parent = tempDir("atlas-workers-");
 const out = join(parent, "_site");
 const data = join(parent, "data");
 cpSync(DEMO_DATA, data, { recursive: true });
+const code = snapshotCode(parent);
 const prefix = `.atlas-build-${basename(out)}-`;
 let before = "";
 
-const leftovers = (): string[] => readdirSync(parent).filter((n) => n !== basename(out) && n !== basename(data) && n !== ".atlas-cache");
+const leftovers = (): string[] => readdirSync(parent).filter((n) => ![basename(out), basename(data), basename(code), ".atlas-cache"].includes(n));
 
 beforeAll(async () => {
-  const r = await runBuild({ data, out, env: { ATLAS_CACHE: "off" } });
+  const r = await runBuildIn(code, { data, out, env: { ATLAS_CACHE: "off" } });
   expect(r.code, r.stderr).toBe(0);
   before = treeHash(out);
-}, 300_000);
+}, 600_000);
 afterAll(() => rmSync(parent, { recursive: true, force: true }));
 
 /**
@@ -36,13 +38,14 @@ afterAll(() => rmSync(parent, { recursive: true, force: true }));
 function signalledWhileWorking(signal: NodeJS.Signals, cache = "off"): Promise<BuildRun & { staging: string }> {
   let staging = "";
   return new Promise((resolve, reject) => {
-    runBuild({
+    runBuildIn(code, {
       data,
       out,
       env: { ATLAS_WORKERS: "2", ATLAS_CACHE: cache },
       onSpawn: (child) => {
         const poll = setInterval(() => {
-          const s = readdirSync(parent).find((n) => n.startsWith(prefix));
+          // This build's own staging folder (named with its pid).
+          const s = readdirSync(parent).find((n) => n.startsWith(`${prefix}${child.pid}-`));
           if (!s) return;
           const dir = join(parent, s);
           try {
@@ -63,12 +66,12 @@ function signalledWhileWorking(signal: NodeJS.Signals, cache = "off"): Promise<B
 
 describe("a build with worker threads", () => {
   it.each(["2", "1"])("with a species that fails (ATLAS_WORKERS=%s) exits 1 with the species' message, no stack, and leaves the old output", async (workers) => {
-    const r = await runBuild({ data, out, env: { ATLAS_FAULT: "species", ATLAS_WORKERS: workers, ATLAS_CACHE: "off" } });
+    const r = await runBuildIn(code, { data, out, env: { ATLAS_FAULT: "species", ATLAS_WORKERS: workers, ATLAS_CACHE: "off" } });
     expect(r.code).toBe(1);
     expect(r.stderr).toMatch(/^build failed; .*_site left as it was:\n {2}building [\w-]+ failed \(ATLAS_FAULT=species\)\n$/);
     expect(treeHash(out)).toBe(before);
     expect(leftovers()).toEqual([]);
-  }, 120_000);
+  }, 600_000);
 
   it.each([
     ["SIGINT", 130],
@@ -81,7 +84,7 @@ describe("a build with worker threads", () => {
     expect(existsSync(r.staging)).toBe(false);
     expect(treeHash(out)).toBe(before);
     expect(leftovers()).toEqual([]);
-  }, 120_000);
+  }, 600_000);
 
   it("killed with SIGKILL while workers write leaves the old output; the next build removes the dead staging folder and publishes the same site", async () => {
     // With the cache: a killed build may leave a half-written cache entry under a temporary name.
@@ -89,10 +92,10 @@ describe("a build with worker threads", () => {
     expect(r.signal).toBe("SIGKILL");
     expect(leftovers()).toEqual([basename(r.staging)]);
     expect(treeHash(out)).toBe(before);
-    const next = await runBuild({ data, out });
+    const next = await runBuildIn(code, { data, out });
     expect(next.code, next.stderr).toBe(0);
     expect(leftovers()).toEqual([]);
     expect(treeHash(out)).toBe(before);
     expect(readdirSync(join(parent, ".atlas-cache", "species")).filter((n) => !n.endsWith(".pack"))).toEqual([]);
-  }, 300_000);
+  }, 900_000);
 });
