@@ -141,9 +141,18 @@ export function lockPoints(groups: readonly LockGroup[], lineCentreHz: Dec | nul
 }
 
 /**
- * The strongest transition of a list of lock points (largest share of the
- * line; the lowest frequency among equals), or null when there is none: the
- * reference the lock-point offsets start from until the reader picks another.
+ * The strongest transition of a list of lock points, or null when there is
+ * none: the reference the lock-point offsets start from until the reader
+ * picks another.
+ *
+ * Formula: the transition with the largest S(F′, F), its share of the whole
+ * line (hyperfineGroupStrengths; Sobelman §9.3, Steck's S_FF′ weighted by
+ * the lower level's statistical weight); the lowest frequency among equals
+ * (the list is sorted by frequency). Exact: yes (fractions compared
+ * exactly). Selection rules: transitions only; crossovers have no strength.
+ *
+ * Worked example: 87Rb D2 gives F = 2 → F′ = 3, 7/16 of the line
+ * (5/8 of the atoms in F = 2 times its share 7/10).
  */
 export function strongestTransition(points: readonly LockPoint[]): LockPoint | null {
   let best: LockPoint | null = null;

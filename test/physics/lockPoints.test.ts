@@ -63,6 +63,8 @@ describe("lockPoints", () => {
     // (half the 266.650 MHz F′ = 2 – F′ = 3 interval).
     const below = find("2>3").frequencyHz!.sub(find("CO 2>2,3").frequencyHz!).div(MHZ);
     expect(below.sub("133.3").abs().lt("0.05")).toBe(true);
+    // worked example of lockPoints: (E_3′ − E_2′)/2 = (3A′ + B′)/2 = (254.1555 + 12.4965)/2 MHz = 133.326 MHz (by hand, from the demo's A′ and B′)
+    expect(below.toString()).toBe("133.326");
   });
 
   it("puts each crossover halfway between the handbook's hyperfine levels", () => {
