@@ -70,8 +70,9 @@ export function land(column: string | undefined = rememberedColumn()): void {
   // The table box from its top (it is never taller than the window), then the row just below the headings.
   window.scrollBy(0, wrap.getBoundingClientRect().top - GAP);
   if (wrap.scrollHeight > wrap.clientHeight + 1) {
-    const below = row.getBoundingClientRect().top - (wrap.getBoundingClientRect().top + head.getBoundingClientRect().height + GAP);
-    if (below > 0) wrap.scrollTop += below;
+    // The heading row as drawn: its cells are sticky, the thead box is not.
+    const headHeight = Math.max(...Array.from(head.rows[0]?.cells ?? []).map((th) => th.getBoundingClientRect().height), 0);
+    wrap.scrollTop += row.getBoundingClientRect().top - (wrap.getBoundingClientRect().top + headHeight + GAP);
   }
   if (!column) return;
   const col = Array.from(head.rows[0]?.cells ?? []).findIndex((th) => th.getAttribute("data-key") === column);
