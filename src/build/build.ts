@@ -95,6 +95,9 @@ export async function buildSite(opts: BuildOptions): Promise<BuildResult> {
     writeFileSync(file, text);
   };
 
+  // Eleventy loads (a second or so) while the species are built: the main thread mostly waits for workers then.
+  const eleventy = import("@11ty/eleventy");
+  eleventy.catch(() => {}); // a failure is reported where it is awaited
   // --- species: restored from the cache, or computed in worker threads (allSpecies.ts); sorted by id ---
   const species = await timedAsync("species", () =>
     buildAllSpecies(folder, snapshot, {
@@ -120,7 +123,7 @@ export async function buildSite(opts: BuildOptions): Promise<BuildResult> {
   };
   write(summary.constantsTable.csvPath, tableCsv(summary.constantsTable));
   write("assets/search-index.js", timed("search", () => searchIndexScript(mergeSearchData(summaries.map((s) => s.search), constantsSearch(summary.constantsTable)))));
-  await timedAsync("site", () => renderSitePages(staging, summary));
+  await timedAsync("site", () => renderSitePages(staging, summary, eleventy));
   timed("bundle", () => bundleBrowser(staging));
 
   if (opts.fault === "render") throw new Error("rendering failed (ATLAS_FAULT=render)");
@@ -141,8 +144,8 @@ export async function buildSite(opts: BuildOptions): Promise<BuildResult> {
 }
 
 /** Eleventy renders templates/*.njk (index, constants, methods, all-species sheet) and copies the assets. */
-async function renderSitePages(staging: string, summary: SiteSummary): Promise<void> {
-  const { default: Eleventy } = await import("@11ty/eleventy");
+async function renderSitePages(staging: string, summary: SiteSummary, module: Promise<typeof import("@11ty/eleventy")>): Promise<void> {
+  const { default: Eleventy } = await module;
   // Passthrough copies (templates/assets, schema) are named from the repository root.
   process.chdir(ROOT);
   const eleventy = new Eleventy(join(ROOT, "templates"), staging, {
