@@ -77,6 +77,8 @@ export async function buildAllSpecies(folder: DataFolder, snapshot: DataSnapshot
       },
       (e: unknown) => {
         failure ??= e;
+        // The build has failed: stop the other workers now rather than let them finish their species.
+        void pool!.close();
       },
     );
     pending.push(p);

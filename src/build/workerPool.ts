@@ -130,15 +130,19 @@ export class SpeciesPool {
     for (const job of this.queue.splice(0)) job.reject(this.broken);
   }
 
-  /** Stop every worker and wait until all have stopped. */
-  async close(): Promise<void> {
-    if (this.closed) return;
-    this.closed = true;
-    const stopped = new Error("species pool is closed");
-    for (const job of this.queue.splice(0)) job.reject(stopped);
-    for (const slot of this.slots) slot.job?.reject(stopped);
-    await Promise.all(this.slots.map((s) => s.worker.terminate()));
-    process.removeListener("SIGINT", this.onSignal);
-    process.removeListener("SIGTERM", this.onSignal);
+  private closing: Promise<void> | null = null;
+
+  /** Stop every worker (queued and running tasks fail) and wait until all have stopped; every call waits for the same. */
+  close(): Promise<void> {
+    this.closing ??= (async () => {
+      this.closed = true;
+      const stopped = new Error("species pool is closed");
+      for (const job of this.queue.splice(0)) job.reject(stopped);
+      for (const slot of this.slots) slot.job?.reject(stopped);
+      await Promise.all(this.slots.map((s) => s.worker.terminate()));
+      process.removeListener("SIGINT", this.onSignal);
+      process.removeListener("SIGTERM", this.onSignal);
+    })();
+    return this.closing;
   }
 }
