@@ -19,7 +19,7 @@ import { fieldText } from "../site/fieldTables.js";
 import { sheetAddress, speciesSheet, type SpeciesSheet } from "../site/sheet.js";
 import { scanIds } from "../site/idScan.js";
 import type { Table } from "../site/table.js";
-import { hasLevelPage, levelViews, lineViews, overviewView, type OverviewCompaction, type PageView, type SpeciesViewsInput } from "../site/speciesViews.js";
+import { hasLevelPage, levelViews, lineViews, overviewView, termViews, type OverviewCompaction, type PageView, type SpeciesViewsInput } from "../site/speciesViews.js";
 import { hasPagesBelow, movedMap, movedScript, MOVED_FILE, type PageIds } from "./forwarding.js";
 import type { RenderPage } from "./renderPages.js";
 import { timed } from "./timings.js";
@@ -75,12 +75,14 @@ function tablesOf(view: PageView): Table[] {
         ...view.shiftSections.flatMap((s) => s.tables),
         view.lines,
         ...view.energies.flatMap((e) => (e.table ? [e.table] : [])),
-        ...view.terms.map((t) => t.table),
+        ...view.terms.flatMap((t) => (t.table ? [t.table] : [])),
       ];
     case "level":
       return [...(view.sublevelShifts ? [view.sublevelShifts] : []), view.energies, ...(view.transitions ? [view.transitions] : [])];
     case "transitions":
-      return [view.transitions];
+      return view.transitions ? [view.transitions] : [];
+    case "term":
+      return [view.table];
     case "line":
       return [view.components, ...(view.hyperfine ? [view.hyperfine, view.hyperfineComponents!] : []), ...(view.lock ? [view.lock.table] : []), ...(view.atFields ?? []).flatMap((a) => (a.table ? [a.table] : []))];
     case "line-field":
@@ -106,13 +108,13 @@ export function buildSpecies(input: SpeciesInput, ctx: SpeciesBuildContext): Spe
   };
   const tooLarge = (html: string, limit = PAGE_LIMIT) => Buffer.byteLength(html) > limit;
   // Every species has pages below its overview (a level or a line page) when it has a line or a level with hyperfine structure.
-  const overviewMoved = input.lines.length > 0 || [...fields.levels.values()].some((f) => f.validity !== null) ? MOVED_FILE : null;
+  const overviewMoved = input.lines.length > 0 || fields.terms.length > 0 || [...fields.levels.values()].some((f) => f.validity !== null) ? MOVED_FILE : null;
 
   // The overview first: as much as fits its budget, the rest left to the level pages.
   let compact: OverviewCompaction = 0;
   let overview = timed("views", () => overviewView(v, compact));
   let overviewHtml = render(overview, overviewMoved);
-  while (tooLarge(overviewHtml, OVERVIEW_LIMIT) && compact < 2) {
+  while (tooLarge(overviewHtml, OVERVIEW_LIMIT) && compact < 4) {
     compact = (compact + 1) as OverviewCompaction;
     overview = timed("views", () => overviewView(v, compact));
     overviewHtml = render(overview, overviewMoved);
@@ -141,18 +143,25 @@ export function buildSpecies(input: SpeciesInput, ctx: SpeciesBuildContext): Spe
     break;
   }
 
-  // Level pages likewise: one that is too large gets its transitions on a page of their own.
-  const bigLevels = new Set<string>();
-  for (const level of timed("views", () => levelViews(v, () => false, compact)).levels) {
-    const html = render(level, null);
-    if (tooLarge(html) && level.transitions) bigLevels.add(level.levelId);
-    else keep(level, html);
+  // Level pages likewise: one that is too large gets its transitions on a page of their own,
+  // and a transitions page still too large gets one page per lower F.
+  const splitLevels = new Set<string>();
+  const byF = new Set<string>();
+  for (;;) {
+    const views = timed("views", () => levelViews(v, (l) => splitLevels.has(l), compact, (l) => byF.has(l)));
+    const pages = [...views.levels, ...views.transitions].map((view) => ({ view, html: render(view, null) }));
+    let again = false;
+    for (const { view, html } of pages) {
+      if (!tooLarge(html)) continue;
+      if (view.kind === "level" && view.transitions && !splitLevels.has(view.levelId)) (splitLevels.add(view.levelId), (again = true));
+      else if (view.kind === "transitions" && view.lowerF2 === null && !byF.has(view.levelId)) (byF.add(view.levelId), (again = true));
+    }
+    if (again) continue;
+    const below = (view: PageView) => pages.some((p) => p.view !== view && p.view.path.startsWith(view.path));
+    for (const { view, html } of pages) keep(view, below(view) ? render(view, MOVED_FILE) : html);
+    break;
   }
-  if (bigLevels.size > 0) {
-    const split = timed("views", () => levelViews(v, (levelId) => bigLevels.has(levelId), compact));
-    for (const level of split.levels) if (bigLevels.has(level.levelId)) keep(level, render(level, MOVED_FILE));
-    for (const t of split.transitions) keep(t, render(t, null));
-  }
+  if (compact >= 3) for (const t of timed("views", () => termViews(v))) keep(t, render(t, null));
   const paths = [overview.path, ...rendered.map((r) => r.view.path)];
   keep(overview, hasPagesBelow(overview.path, paths) === (overviewMoved !== null) ? overviewHtml : render(overview, hasPagesBelow(overview.path, paths) ? MOVED_FILE : null));
 

@@ -123,15 +123,23 @@ export function levelPlots(l: LevelResult, f: LevelFieldResult, fields: Configur
 }
 
 /** Transitions between the sublevels of a level, with their field-insensitive points; null when there are none. */
-export function transitionsTable(l: LevelResult, f: LevelFieldResult, fields: ConfiguredField[], home: TableHome): Table | null {
-  if (f.transitions.length === 0) return null;
+export function transitionsTable(
+  l: LevelResult,
+  f: LevelFieldResult,
+  fields: ConfiguredField[],
+  home: TableHome,
+  /** Only the transitions from this lower F (doubled), for a page per lower F. */
+  lowerF2?: number,
+): Table | null {
+  const rows = lowerF2 === undefined ? f.transitions : f.transitions.filter((t) => t.lower.F2 === lowerF2);
+  if (rows.length === 0) return null;
   const lid = l.input.id;
   const positive = fields.filter((b) => b.tesla.gt(0));
   return makeTable<SublevelTransition>(
     {
-      id: `rf:${lid}`,
-      caption: `${lid} ${termText(l.input.term)}: transitions between sublevels (microwave and radio frequency)`,
-      csvPath: csvName(home, lid, "transitions"),
+      id: lowerF2 === undefined ? `rf:${lid}` : `rf:${lid}:F=${formatDoubled(lowerF2)}`,
+      caption: `${lid} ${termText(l.input.term)}: transitions between sublevels (microwave and radio frequency)${lowerF2 === undefined ? "" : `, from F = ${formatDoubled(lowerF2)}`}`,
+      csvPath: lowerF2 === undefined ? csvName(home, lid, "transitions") : csvName(home, lid, "transitions-from-F", formatDoubled(lowerF2)),
       exportUrl: home.exportUrl,
       anchor: (t) => transitionAnchor(lid, t.lower, t.upper),
       columns: [
@@ -156,7 +164,7 @@ export function transitionsTable(l: LevelResult, f: LevelFieldResult, fields: Co
         })),
       ],
     },
-    f.transitions,
+    rows,
   );
 }
 

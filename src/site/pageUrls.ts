@@ -14,6 +14,8 @@ export const speciesPath = (speciesId: string) => `species/${speciesId}/`;
 export const levelPagePath = (speciesId: string, levelId: string) => `species/${speciesId}/level/${pageSlug(levelId)}/`;
 export const linePagePath = (speciesId: string, lineId: string) => `species/${speciesId}/line/${pageSlug(lineId)}/`;
 export const lineFieldPagePath = (speciesId: string, lineId: string, tesla: string) => `${linePagePath(speciesId, lineId)}B-${tesla}T/`;
+/** A fine-structure term's page ("5p 2P°" → term/5p-2Po/), used when a large species' overview leaves its tables to it. */
+export const termPagePath = (speciesId: string, termKey: string) => `species/${speciesId}/term/${pageSlug(termKey.replace(/\s+/g, "-").replace(/°/g, "o"))}/`;
 export const sheetPath = (speciesId: string) => `species/${speciesId}/sheet/`;
 export const exportPath = (speciesId: string) => `export/${speciesId}.json`;
 /** The HTML file of a page path. */

@@ -12,6 +12,7 @@
  * link on to the page that now holds its row.
  */
 import { exportText, type Dec } from "../physics/decimal.js";
+import { pageSlug } from "../data/ids.js";
 import { formatDoubled } from "../physics/quantum.js";
 import type { SpeciesFieldResult } from "../results/computeFields.js";
 import type { ConfiguredField, LineAtFieldResult } from "../results/fieldTypes.js";
@@ -52,7 +53,7 @@ import {
   SHOWN_DIGITS,
   type TableHome,
 } from "./linearTables.js";
-import { exportPath, levelPagePath, lineFieldPagePath, linePagePath, sheetPath, speciesPath } from "./pageUrls.js";
+import { exportPath, levelPagePath, lineFieldPagePath, linePagePath, sheetPath, speciesPath, termPagePath } from "./pageUrls.js";
 import { patternSketchSvg } from "./plots/patternSketch.js";
 import { lockView, type LockView } from "./lockTables.js";
 import { termParts, type Cell, type Table, type TermParts } from "./table.js";
@@ -80,14 +81,15 @@ export interface OverviewView extends PageCommon {
   sheetUrl: string;
   glance: Table;
   intervals: { levelId: string; items: { F: string; Fp: string; mhz: Cell }[] }[];
-  patterns: { lineId: string; url: string; pattern: string; gEff: string; sketch: string; summary: string }[];
+  patterns: { lineId: string; url: string; pattern: string; gEff: string; sketch: string; sketchShown: boolean; summary: string }[];
   levels: Table;
   shiftSections: { anchor: string; termParts: TermParts; title: string; levelUrl: string | null; tables: Table[] }[];
   lines: Table;
   fieldsText: string[];
   /** Energies per level; a level without a page of its own keeps its field section's anchor here. */
   energies: { levelId: string; levelUrl: string | null; sectionAnchor: string | null; table: Table | null }[];
-  terms: { anchor: string; key: string; facts: string[]; table: Table }[];
+  /** Fine-structure terms; the states table is on the term's own page (url) when the overview is compacted (3). */
+  terms: { anchor: string; key: string; facts: string[]; table: Table | null; url: string | null }[];
   lineLinks: { lineId: string; url: string; summary: string }[];
 }
 
@@ -113,7 +115,11 @@ export interface TransitionsView extends PageCommon {
   levelId: string;
   levelUrl: string;
   termParts: TermParts;
-  transitions: Table;
+  /** Null when the transitions are on pages per lower F (parts). */
+  transitions: Table | null;
+  parts: { text: string; url: string }[];
+  /** Doubled lower F of a page per lower F; null for the page of all. */
+  lowerF2: number | null;
 }
 
 export interface AtFieldView {
@@ -167,7 +173,38 @@ const POLARIZATION_PARTS: { key: string; text: string; test: (p: string | null) 
   { key: "dm2", text: "Δm = ±2 components", test: (p) => p === null },
 ];
 
-export type PageView = OverviewView | LevelView | TransitionsView | LineView | LineFieldView;
+export interface TermView extends PageCommon {
+  kind: "term";
+  key: string;
+  anchor: string;
+  facts: string[];
+  table: Table;
+}
+
+export type PageView = OverviewView | LevelView | TransitionsView | LineView | LineFieldView | TermView;
+
+/** The term pages of a species (used when the overview leaves the term tables to them, OverviewCompaction 3). */
+export function termViews(v: SpeciesViewsInput): TermView[] {
+  const s = v.result;
+  const id = s.input.id;
+  const home: TableHome = { speciesId: id, csvBase: `species/${id}/csv`, exportUrl: exportPath(id) };
+  return v.fields.terms.map((t) => ({
+    kind: "term",
+    path: termPagePath(id, t.key),
+    title: `${s.input.label} ${t.key}`,
+    crumbs: [
+      { text: "Species", href: "/" },
+      { text: s.input.label, href: `/${speciesPath(id)}#${termAnchor(t.key)}` },
+      { text: t.key, href: null },
+    ],
+    speciesId: id,
+    speciesLabel: s.input.label,
+    key: t.key,
+    anchor: `${termAnchor(t.key)}-states`,
+    facts: termFacts(t),
+    table: termTable(t, v.configured, home),
+  }));
+}
 
 export interface SpeciesViewsInput {
   result: SpeciesResult;
@@ -188,11 +225,13 @@ export const hasLevelPage = (s: SpeciesFieldResult, l: LevelResult): boolean => 
 /**
  * How much of a large species the overview leaves to its level pages, so the
  * overview stays under its budget: 0 nothing; 1 the energies at the bias
- * fields of levels that have a page; 2 also their (F, mF) shift tables. The
+ * fields of levels that have a page; 2 also their (F, mF) shift tables;
+ * 3 also the fine-structure term tables (to term pages); 4 also the pattern
+ * pictures (each line page has its own). The
  * rows keep their ids on the level pages, and the overview's forwarding map
  * sends old links there.
  */
-export type OverviewCompaction = 0 | 1 | 2;
+export type OverviewCompaction = 0 | 1 | 2 | 3 | 4;
 
 export function overviewView(v: SpeciesViewsInput, compact: OverviewCompaction = 0): OverviewView {
   const s = v.result;
@@ -220,6 +259,7 @@ export function overviewView(v: SpeciesViewsInput, compact: OverviewCompaction =
     glance: glanceTable(s, home, v.muB_h),
     intervals: s.levels.filter((l) => l.hyperfine.length > 1).map((l) => ({ levelId: l.input.id, items: hyperfineIntervals(l) })),
     patterns: s.lines.map((ln) => ({
+      sketchShown: compact < 4,
       lineId: ln.input.id,
       url: `/${linePagePath(id, ln.input.id)}`,
       pattern: ln.pattern ?? "—",
@@ -249,7 +289,13 @@ export function overviewView(v: SpeciesViewsInput, compact: OverviewCompaction =
       sectionAnchor: levelUrl(l) ? null : levelFieldSectionAnchor(l.input.id),
       table: compact >= 1 && levelUrl(l) ? null : energiesTable(l, v.fields.levels.get(l.input.id)!, v.configured, home, false),
     })),
-    terms: v.fields.terms.map((t) => ({ anchor: termAnchor(t.key), key: t.key, facts: termFacts(t), table: termTable(t, v.configured, home) })),
+    terms: v.fields.terms.map((t) => ({
+      anchor: termAnchor(t.key),
+      key: t.key,
+      facts: termFacts(t),
+      table: compact >= 3 ? null : termTable(t, v.configured, home),
+      url: compact >= 3 ? `/${termPagePath(id, t.key)}` : null,
+    })),
     lineLinks: s.lines.map((ln) => ({ lineId: ln.input.id, url: `/${linePagePath(id, ln.input.id)}`, summary: ln.summary })),
   };
 }
@@ -263,6 +309,8 @@ export function levelViews(
   v: SpeciesViewsInput,
   split: (levelId: string) => boolean = () => false,
   compact: OverviewCompaction = 0,
+  /** Transitions pages still too large: one page per lower F instead. */
+  splitByF: (levelId: string) => boolean = () => false,
 ): { levels: LevelView[]; transitions: TransitionsView[] } {
   const s = v.result;
   const id = s.input.id;
@@ -298,18 +346,40 @@ export function levelViews(
       transitionsUrl: separate ? `/${path}transitions/` : null,
     });
     if (separate) {
-      transitions.push({
-        kind: "transitions",
-        path: `${path}transitions/`,
-        title: `${s.input.label} ${l.input.id} transitions`,
-        crumbs: [...crumbs, { text: l.input.id, href: `/${path}` }, { text: "transitions", href: null }],
+      const tPath = `${path}transitions/`;
+      const byF = splitByF(l.input.id);
+      const lowerFs = [...new Set(f.transitions.map((t) => t.lower.F2))].sort((a, b) => a - b);
+      const common = {
+        kind: "transitions" as const,
         speciesId: id,
         speciesLabel: s.input.label,
         levelId: l.input.id,
         levelUrl: `/${path}`,
         termParts: termParts(l.input.term),
-        transitions: table,
+      };
+      const fSlug = (F2: number) => `F-${pageSlug(formatDoubled(F2))}/`;
+      transitions.push({
+        ...common,
+        path: tPath,
+        title: `${s.input.label} ${l.input.id} transitions`,
+        crumbs: [...crumbs, { text: l.input.id, href: `/${path}` }, { text: "transitions", href: null }],
+        transitions: byF ? null : table,
+        parts: byF ? lowerFs.map((F2) => ({ text: `from F = ${formatDoubled(F2)}`, url: `/${tPath}${fSlug(F2)}` })) : [],
+        lowerF2: null,
       });
+      if (byF) {
+        for (const F2 of lowerFs) {
+          transitions.push({
+            ...common,
+            path: `${tPath}${fSlug(F2)}`,
+            title: `${s.input.label} ${l.input.id} transitions from F = ${formatDoubled(F2)}`,
+            crumbs: [...crumbs, { text: l.input.id, href: `/${path}` }, { text: "transitions", href: `/${tPath}` }, { text: `from F = ${formatDoubled(F2)}`, href: null }],
+            transitions: transitionsTable(l, f, v.configured, home, F2),
+            parts: [],
+            lowerF2: F2,
+          });
+        }
+      }
     }
   });
   return { levels, transitions };
