@@ -78,9 +78,7 @@ export function syntheticSearchAtlas(): SearchSpecies[] {
         pattern: `(${ni % 3}) ${ni % 5}, ${(ni % 5) + 2} / ${(ni % 4) + 1}`,
       };
     });
-    const levelPages = new Map(
-      levels.map((l, li) => [l.input.id, { transitions: transitionsOf(l.hyperfine.map((h) => h.F2), li), transitionsPage: `species/${id}/level/${l.input.id.replace("/", "_")}/index.html` }] as const),
-    );
-    return { id, label: `${si}X`, muB_h: dec("13996244917.1"), levels, lines, levelPages };
+    const transitions = new Map(levels.map((l, li) => [l.input.id, transitionsOf(l.hyperfine.map((h) => h.F2), li)] as const));
+    return { id, label: `${si}X`, muB_h: dec("13996244917.1"), levels, lines, transitions };
   });
 }

@@ -24,9 +24,10 @@ import { componentAnchor, fieldStateAnchor, hyperfineAnchor, levelAnchor, lineAn
 import { compareDecimal, decimalKey, parseDecimal, type DecimalKey } from "../site/decimalText.js";
 import { formatM, formatQuantum, partsText, polarizationSymbol, transitionKindLabel } from "../site/plainFormat.js";
 import type { ConstantDoc, LevelDoc, LineDoc, SearchData } from "../site/searchIndex.js";
+import { unpackInts } from "../site/searchCodec.js";
 import { searchTokens } from "../site/searchNormalize.js";
 import { convertShift, DEFAULT_SHIFT_UNIT } from "../site/shiftUnits.js";
-import { FIELD_UNITS, POLARIZATION_WORDS, TRANSITION_WORDS, type TransitionWord } from "../site/searchWords.js";
+import { FIELD_UNITS, KIND_WORDS, POLARIZATION_WORDS, TRANSITION_WORDS, type TransitionWord } from "../site/searchWords.js";
 
 export interface FinderRow {
   /** What the row is: "species", "level", "hyperfine sublevel", "sublevel transition", … */
@@ -74,6 +75,8 @@ export interface Query {
   /** A field with a unit: as typed ("1 T") and in tesla (decimal text, exact). */
   field: { text: string; compact: string; tesla: string } | null;
   transitions: TransitionWord[];
+  /** Kinds of entry the query keeps to (KIND_WORDS: "line", "level", "constant"); empty for all. */
+  kinds: string[];
 }
 
 const ASSIGN = /^(mf|mj|mu|ml|m|f|j|dm)=(-?\d+(?:\/2)?)$/;
@@ -101,7 +104,7 @@ function fieldOf(number: string, unitWord: string): Query["field"] {
 
 /** A query read into words and structure (see the file comment). */
 export function parseQuery(text: string): Query {
-  const q: Query = { words: [], states: [], comp: {}, dm: null, field: null, transitions: [] };
+  const q: Query = { words: [], states: [], comp: {}, dm: null, field: null, transitions: [], kinds: [] };
   const tokens = searchTokens(text);
   let cur: QueryState | null = null;
   for (let i = 0; i < tokens.length; i++) {
@@ -127,6 +130,11 @@ export function parseQuery(text: string): Query {
     const pol = POLARIZATION_WORDS[t];
     if (pol) {
       q.dm = [...(q.dm ?? []), ...pol];
+      continue;
+    }
+    const kind = KIND_WORDS[t];
+    if (kind && tokens.length > 1) {
+      if (!q.kinds.includes(kind)) q.kinds.push(kind);
       continue;
     }
     const tr = TRANSITION_WORDS[t];
@@ -194,6 +202,9 @@ export interface Finder {
   all(): FinderRow[];
 }
 
+/** Positions in a level's row pages (RowPages of searchIndex.ts). */
+const ROWS = { mJ: 0, F: 1, mF: 2, field: 3, rf: 4 } as const;
+
 /** Counting stops here: a query that matches more says "more than …". */
 export const CAP = 1000;
 
@@ -209,7 +220,7 @@ export function createFinder(data: SearchData, MiniSearchClass: typeof MiniSearc
   };
   data.species.forEach((s, i) => add({ kind: "species", i, name: s[3], term: "", species: s[3], num: "", rel: "", points: "" }));
   data.levels.forEach((l, i) =>
-    add({ kind: "level", i, name: l[3], term: l[4], species: speciesKeys[l[0]]!, num: "", rel: "", points: [...new Set(l[14].map((p) => pointKey(p[2])))].join(" ") }),
+    add({ kind: "level", i, name: l[3], term: l[4], species: speciesKeys[l[0]]!, num: "", rel: "", points: [...new Set(l[13].map((p) => pointKey(p[2])))].join(" ") }),
   );
   data.lines.forEach((n, i) => {
     const rel = [data.levels[n[2]], data.levels[n[3]]].map((l) => (l ? `${l[3]} ${l[4]}` : "")).join(" ");
@@ -255,6 +266,8 @@ export function createFinder(data: SearchData, MiniSearchClass: typeof MiniSearc
   }
 
   const speciesOf = (k: number) => data.species[k]!;
+  /** The page of a kind of row of a level ("" in the index is the species overview). */
+  const pageOf = (l: LevelDoc, kind: number) => l[11][kind] || speciesOf(l[0])[2];
   const levelBase = (l: LevelDoc) => `${speciesOf(l[0])[1]} · ${l[1]} ${l[2]}`;
 
   /** The shift of sublevel m2 in the reader's unit, from the shift per unit m (Hz/T). */
@@ -295,7 +308,7 @@ export function createFinder(data: SearchData, MiniSearchClass: typeof MiniSearc
           const per = shiftText(l[10][k] ?? "", 2, unit);
           out.push({
             kind: "hyperfine level",
-            href: `${page}#${hyperfineAnchor(id, F2)}`,
+            href: `${pageOf(l, ROWS.F)}#${hyperfineAnchor(id, F2)}`,
             label: `${base} · F = ${formatQuantum(F2)}`,
             ...(gF ? { answer: `gF = ${gF}${per ? `; ${per} per unit mF` : ""}`, column: "gF" } : {}),
           });
@@ -305,7 +318,7 @@ export function createFinder(data: SearchData, MiniSearchClass: typeof MiniSearc
         const shift = shiftText(l[10][k] ?? "", mf, unit);
         out.push({
           kind: "hyperfine sublevel",
-          href: `${page}#${mFAnchor(id, F2, mf)}`,
+          href: `${pageOf(l, ROWS.mF)}#${mFAnchor(id, F2, mf)}`,
           label: `${base} · F = ${formatQuantum(F2)}, mF = ${formatM(mf)}`,
           ...(gF ? { answer: `gF = ${gF}; shift ${shift || "0"}`, column: "shift" } : {}),
         });
@@ -316,7 +329,7 @@ export function createFinder(data: SearchData, MiniSearchClass: typeof MiniSearc
       const shift = shiftText(l[8], mj, unit);
       out.push({
         kind: "sublevel",
-        href: `${page}#${mJAnchor(id, mj)}`,
+        href: `${pageOf(l, ROWS.mJ)}#${mJAnchor(id, mj)}`,
         label: `${base} · mJ = ${formatM(mj)}`,
         ...(l[7] ? { answer: `gJ = ${l[7]}; shift ${shift || "0"}`, column: "shift" } : {}),
       });
@@ -347,7 +360,7 @@ export function createFinder(data: SearchData, MiniSearchClass: typeof MiniSearc
         if (!fitsFieldRow(s, hf, F2, m2)) continue;
         out.push({
           kind: "energy at a field",
-          href: `${page}#${fieldStateAnchor(l[1], F2, m2)}`,
+          href: `${pageOf(l, ROWS.field)}#${fieldStateAnchor(l[1], F2, m2)}`,
           label: `${levelBase(l)} · ${hf ? `F = ${formatQuantum(F2)}, mF = ${formatM(m2)}` : `mJ = ${formatM(m2)}`} · energy at ${data.fields[k]![0]}`,
           column: `E${k}`,
         });
@@ -368,13 +381,13 @@ export function createFinder(data: SearchData, MiniSearchClass: typeof MiniSearc
     let list = transitionsOf.get(li);
     if (list) return list;
     const l = data.levels[li]!;
-    const flat = l[13];
+    const flat = unpackInts(l[12]);
     list = [];
     for (let k = 0; 5 * k + 4 < flat.length; k++) {
       const o = 5 * k;
       list.push({ k, lower: { F2: flat[o]!, mF2: flat[o + 1]! }, upper: { F2: flat[o + 2]!, mF2: flat[o + 3]! }, kind: flat[o + 4] ? "two-photon" : "magnetic-dipole", points: [] });
     }
-    for (const [k, tesla, text] of l[14]) list[k]?.points.push({ tesla: decimalKey(tesla)!, text });
+    for (const [k, tesla, text] of l[13]) list[k]?.points.push({ tesla: decimalKey(tesla)!, text });
     transitionsOf.set(li, list);
     return list;
   }
@@ -411,7 +424,7 @@ export function createFinder(data: SearchData, MiniSearchClass: typeof MiniSearc
     if (q.transitions.includes("magic")) list.sort(byLowest(magicPoints));
     else if (q.transitions.includes("insensitive")) list.sort(byLowest((t) => t.points));
     else list.sort((a, b) => Number(isClock(b)) - Number(isClock(a)));
-    const page = l[12] || l[11];
+    const page = pageOf(l, ROWS.rf);
     for (const t of list) {
       const points = t.points.map((p) => p.text).join("; ");
       out.push({
@@ -424,6 +437,12 @@ export function createFinder(data: SearchData, MiniSearchClass: typeof MiniSearc
   }
 
   // --- rows of a line: the line and its Zeeman components ---
+  const components = new Map<LineDoc, number[]>();
+  const componentsOf = (n: LineDoc): number[] => {
+    let c = components.get(n);
+    if (!c) components.set(n, (c = unpackInts(n[7])));
+    return c;
+  };
   function lineRows(n: LineDoc, q: Query, out: FinderRow[]): void {
     const sp = speciesOf(n[0]);
     const id = n[1];
@@ -440,7 +459,7 @@ export function createFinder(data: SearchData, MiniSearchClass: typeof MiniSearc
       });
       return;
     }
-    const c = n[7];
+    const c = componentsOf(n);
     for (let k = 0; k + 1 < c.length; k += 2) {
       const mu = c[k]!;
       const ml = c[k + 1]!;
@@ -473,6 +492,7 @@ export function createFinder(data: SearchData, MiniSearchClass: typeof MiniSearc
     calculatorShown.clear();
     for (const d of entities(q.words)) {
       if (rows.length >= CAP) break;
+      if (q.kinds.length && !q.kinds.includes(d.kind)) continue;
       if (d.kind === "species") {
         if (!structured) {
           const s = data.species[d.i]!;
@@ -494,7 +514,7 @@ export function createFinder(data: SearchData, MiniSearchClass: typeof MiniSearc
   function all(): FinderRow[] {
     const rows: FinderRow[] = [];
     const unit = DEFAULT_SHIFT_UNIT;
-    const q = (over: Partial<Query>): Query => ({ words: [], states: [], comp: {}, dm: null, field: null, transitions: [], ...over });
+    const q = (over: Partial<Query>): Query => ({ words: [], states: [], comp: {}, dm: null, field: null, transitions: [], kinds: [], ...over });
     for (const s of data.species) rows.push({ kind: "species", href: s[2], label: s[1] });
     data.levels.forEach((l, li) => {
       levelRows(l, q({}), unit, rows);
@@ -510,7 +530,7 @@ export function createFinder(data: SearchData, MiniSearchClass: typeof MiniSearc
     });
     for (const n of data.lines) {
       lineRows(n, q({}), rows);
-      const c = n[7];
+      const c = componentsOf(n);
       for (let k = 0; k + 1 < c.length; k += 2) lineRows(n, q({ comp: { mu: c[k]!, ml: c[k + 1]! } }), rows);
     }
     for (const c of data.constants) rows.push(constantRow(c));

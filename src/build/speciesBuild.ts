@@ -13,8 +13,8 @@ import { computeFields } from "../results/computeFields.js";
 import type { ConfiguredField } from "../results/fieldTypes.js";
 import { tableCsv } from "../site/csv.js";
 import { speciesExport } from "../site/exportJson.js";
-import { exportPath, htmlFile, levelPagePath, sheetPath, speciesPath } from "../site/pageUrls.js";
-import { searchData, type SearchData, type SearchSpecies } from "../site/searchIndex.js";
+import { exportPath, htmlFile, sheetPath, speciesPath } from "../site/pageUrls.js";
+import { searchData, type SearchData, type SearchSpecies, type SearchTransition } from "../site/searchIndex.js";
 import { fieldText } from "../site/fieldTables.js";
 import { sheetAddress, speciesSheet, type SpeciesSheet } from "../site/sheet.js";
 import { scanIds } from "../site/idScan.js";
@@ -167,6 +167,11 @@ export function buildSpecies(input: SpeciesInput, ctx: SpeciesBuildContext): Spe
 
   // Forwarding maps, from the ids of the rendered pages.
   const ids: PageIds[] = rendered.map((r) => ({ path: r.view.path, ids: scanIds(r.html) }));
+  // Where each row is, for the search index: the overview first, so a row it shares with a detail page is found there.
+  const rowPages = new Map<string, string>();
+  for (const page of [...ids].sort((a, b) => Number(b.path === overview.path) - Number(a.path === overview.path))) {
+    for (const rowId of page.ids) if (!rowPages.has(rowId)) rowPages.set(rowId, htmlFile(page.path));
+  }
   for (const page of ids) {
     if (!hasPagesBelow(page.path, paths)) continue;
     const map = movedMap(page, ids);
@@ -203,27 +208,23 @@ export function buildSpecies(input: SpeciesInput, ctx: SpeciesBuildContext): Spe
       nuclearSpin: input.nucleus ? (input.nucleus.I2 % 2 === 0 ? String(input.nucleus.I2 / 2) : `${input.nucleus.I2}/2`) : null,
     },
     sheet: speciesSheet(result, { mList: false }),
-    search: timed("search", () => searchData(searchSpecies(v, rendered.map((r) => r.view)), ctx.configured.map((f) => ({ text: f.text, tesla: exportText(f.tesla, 30) })))),
+    search: timed("search", () => searchData(searchSpecies(v, (rowId) => rowPages.get(rowId) ?? null), ctx.configured.map((f) => ({ text: f.text, tesla: exportText(f.tesla, 30) })))),
     pages: rendered.length + 1,
   };
 }
 
 /**
- * What the search index needs of a species: its results, and for each level
- * with a page its sublevel transitions (field-insensitive points written as
- * the transitions table writes them) and the page that lists them.
+ * What the search index needs of a species: its results, each level's
+ * sublevel transitions (field-insensitive points written as the transitions
+ * table writes them), and where the build put each row.
  */
-function searchSpecies(v: SpeciesViewsInput, views: PageView[]): SearchSpecies {
+function searchSpecies(v: SpeciesViewsInput, pageOf: (rowId: string) => string | null): SearchSpecies {
   const s = v.result;
-  const transitionsPages = new Map(views.flatMap((view) => (view.kind === "transitions" ? [[view.levelId, htmlFile(view.path)] as const] : [])));
-  const levelPages: NonNullable<SearchSpecies["levelPages"]> = new Map();
+  const transitions = new Map<string, SearchTransition[]>();
   for (const l of s.levels) {
-    if (!hasLevelPage(v.fields, l)) continue;
-    const f = v.fields.levels.get(l.input.id)!;
-    levelPages.set(l.input.id, {
-      transitions: f.transitions.map((t) => ({ ...t, fieldInsensitive: t.fieldInsensitive.map((p) => ({ tesla: p.tesla, text: fieldText(p.tesla, 7) })) })),
-      transitionsPage: transitionsPages.get(l.input.id) ?? htmlFile(levelPagePath(s.input.id, l.input.id)),
-    });
+    const f = v.fields.levels.get(l.input.id);
+    if (!f || !hasLevelPage(v.fields, l)) continue;
+    transitions.set(l.input.id, f.transitions.map((t) => ({ ...t, fieldInsensitive: t.fieldInsensitive.map((p) => ({ tesla: p.tesla, text: fieldText(p.tesla, 7) })) })));
   }
-  return { id: s.input.id, label: s.input.label, muB_h: v.muB_h, levels: s.levels, lines: s.lines, levelPages };
+  return { id: s.input.id, label: s.input.label, muB_h: v.muB_h, levels: s.levels, lines: s.lines, transitions, pageOf };
 }

@@ -12,6 +12,7 @@
  *  - sublevels (mJ, F, (F, mF)) and the rows of the energies tables from J and the F values;
  *  - Zeeman components from their (mu, ml) pairs;
  *  - sublevel transitions from flat (F, mF, F′, mF′, kind) tuples, with their field-insensitive points.
+ * The long lists of small integers are packed one character a value (searchCodec.ts).
  * The answers a result line shows are here too: gJ and gF as the tables
  * show them, the shift per unit m in Hz/T (the finder multiplies by m and
  * converts it exactly into the reader's unit), each line's pattern, each
@@ -23,8 +24,11 @@
  * id of the built pages and every row id of those kinds is reachable.
  */
 import { exportText, type Dec } from "../physics/decimal.js";
+import { mValues } from "../physics/quantum.js";
+import { componentAnchor, fieldStateAnchor, hyperfineAnchor, mFAnchor, mJAnchor, transitionAnchor } from "./anchors.js";
 import { formatNumber, partsText, termText, writtenParts } from "./format.js";
 import { htmlFile, levelPagePath, linePagePath, speciesPath } from "./pageUrls.js";
+import { packInts } from "./searchCodec.js";
 import { searchTokens, termKeys } from "./searchNormalize.js";
 import { ELEMENT_NAMES, GROUND_WORDS, elementOf } from "./searchWords.js";
 import type { Table } from "./table.js";
@@ -62,8 +66,14 @@ export interface SearchSpecies {
     components: { mu2: number; ml2: number }[];
     pattern: string | null;
   }[];
-  /** The levels with a page of their own, each with its sublevel transitions and the page that lists them (the level page, or its transitions page when split). */
-  levelPages?: Map<string, { transitions: SearchTransition[]; transitionsPage: string }>;
+  /** The sublevel transitions of each level that has them (field-insensitive points written as the transitions table writes them). */
+  transitions?: Map<string, SearchTransition[]>;
+  /**
+   * The page (from the site root) that holds a row id, as the build wrote
+   * the pages: the overview where a row is there too, else the level or line
+   * page. Without it (tests of the index alone) the pages of pageUrls.ts are assumed.
+   */
+  pageOf?: (rowId: string) => string | null;
 }
 
 /** [id, label, overview page from the site root, search keys] */
@@ -71,12 +81,15 @@ export type SpeciesDoc = [string, string, string, string];
 /**
  * [species index, id, term typeset, id keys, term keys, doubled J, doubled F values,
  *  gJ shown, gJ·μB/h (Hz/T) or "", gF shown per F, gF·μB/h per F (Hz/T) or "",
- *  level page or "", transitions page or "", transitions as flat (F2, mF2, F2′, mF2′, kind) with kind 0 = M1, 1 = two-photon,
+ *  pages of its rows [mJ, F, (F, mF), energies at the fields, transitions] ("" for the species overview),
+ *  transitions as flat (F2, mF2, F2′, mF2′, kind) with kind 0 = M1, 1 = two-photon (packed, searchCodec.ts),
  *  field-insensitive points as [transition index, tesla, text]]
  */
-export type LevelDoc = [number, string, string, string, string, number, number[], string, string, string[], string[], string, string, number[], [number, string, string][]];
-/** [species index, id, upper level index, lower level index, vacuum λ in nm or "", multipole, id keys, flat (mu2, ml2) pairs, line page from the site root, pattern or ""] */
-export type LineDoc = [number, string, number, number, string, string, string, number[], string, string];
+export type LevelDoc = [number, string, string, string, string, number, number[], string, string, string[], string[], RowPages, string | number[], [number, string, string][]];
+/** Pages of a level's rows: [mJ, F, (F, mF), energies at the fields, transitions]; "" is the species overview. */
+export type RowPages = [string, string, string, string, string];
+/** [species index, id, upper level index, lower level index, vacuum λ in nm or "", multipole, id keys, flat (mu2, ml2) pairs (packed), page of the components from the site root, pattern or ""] */
+export type LineDoc = [number, string, number, number, string, string, string, string | number[], string, string];
 /** [constants page and anchor from the site root, symbol, name, value as shown, unit as shown] */
 export type ConstantDoc = [string, string, string, string, string];
 
@@ -146,35 +159,51 @@ export function searchData(s: SearchSpecies, fields: { text: string; tesla: stri
   const lines: LineDoc[] = [];
   const levelIndex = new Map<string, number>();
   const ground = groundLevels(s);
+  const overview = htmlFile(speciesPath(s.id));
+  // Where a row is: on the page the build put it, "" for the overview.
+  const where = (rowId: string, fallback: string) => {
+    const page = s.pageOf ? (s.pageOf(rowId) ?? fallback) : fallback;
+    return page === overview ? "" : page;
+  };
   for (const l of s.levels) {
     levelIndex.set(l.input.id, levels.length);
-    const page = s.levelPages?.get(l.input.id);
+    const id = l.input.id;
+    const transitions = s.transitions?.get(id) ?? [];
     const flat: number[] = [];
     const points: [number, string, string][] = [];
-    (page?.transitions ?? []).forEach((t, k) => {
+    transitions.forEach((t, k) => {
       flat.push(t.lower.F2, t.lower.mF2, t.upper.F2, t.upper.mF2, t.kind === "two-photon" ? 1 : 0);
       for (const p of t.fieldInsensitive) points.push([k, exportText(p.tesla, 12), p.text]);
     });
-    const levelPage = page ? htmlFile(levelPagePath(s.id, l.input.id)) : "";
+    const levelPage = htmlFile(levelPagePath(s.id, id));
+    const h = l.hyperfine[0];
+    const fieldF2 = h ? h.F2 : l.J2;
+    const pages: RowPages = [
+      where(mJAnchor(id, mValues(l.J2)[0]!), overview),
+      h ? where(hyperfineAnchor(id, h.F2), overview) : "",
+      h ? where(mFAnchor(id, h.F2, mValues(h.F2)[0]!), overview) : "",
+      where(fieldStateAnchor(id, fieldF2, mValues(fieldF2)[0]!), overview),
+      transitions[0] ? where(transitionAnchor(id, transitions[0].lower, transitions[0].upper), levelPage) : "",
+    ];
     levels.push([
       0,
-      l.input.id,
+      id,
       termText(l.input.term),
-      ground.has(l.input.id) ? unique([...idKeys(l.input.id).split(" "), ...GROUND_WORDS]) : idKeys(l.input.id),
+      ground.has(id) ? unique([...idKeys(id).split(" "), ...GROUND_WORDS]) : idKeys(id),
       unique(termKeys(l.input.term.text)),
       l.J2,
-      l.hyperfine.map((h) => h.F2),
+      l.hyperfine.map((hf) => hf.F2),
       gJShown(l),
       perM(l.gJ, s.muB_h),
-      l.hyperfine.map((h) => shown(h.gF)),
-      l.hyperfine.map((h) => perM(h.gF, s.muB_h)),
-      levelPage,
-      page && page.transitionsPage !== levelPage ? page.transitionsPage : "",
-      flat,
+      l.hyperfine.map((hf) => shown(hf.gF)),
+      l.hyperfine.map((hf) => perM(hf.gF, s.muB_h)),
+      pages,
+      packInts(flat),
       points,
     ]);
   }
   for (const ln of s.lines) {
+    const linePage = htmlFile(linePagePath(s.id, ln.input.id));
     const wl = ln.input.wavelength ? ln.input.wavelength.si.mul("1e9").toSignificantDigits(12).toFixed() : "";
     lines.push([
       0,
@@ -184,8 +213,8 @@ export function searchData(s: SearchSpecies, fields: { text: string; tesla: stri
       wl,
       ln.input.multipole,
       idKeys(ln.input.id),
-      ln.components.flatMap((c) => [c.mu2, c.ml2]),
-      htmlFile(linePagePath(s.id, ln.input.id)),
+      packInts(ln.components.flatMap((c) => [c.mu2, c.ml2])),
+      ln.components[0] ? where(componentAnchor(ln.input.id, ln.components[0].mu2, ln.components[0].ml2), linePage) || overview : linePage,
       ln.pattern ?? "",
     ]);
   }

@@ -81,6 +81,11 @@ export const TRANSITION_WORDS: Readonly<Record<string, TransitionWord>> = {
   rf: "any", "radio-frequency": "any", radiofrequency: "any", transition: "any", transitions: "any",
 };
 
+/** Words that keep a search to one kind of entry ("Rb D line": the lines of Rb whose id starts with D). */
+export const KIND_WORDS: Readonly<Record<string, "species" | "level" | "line" | "constant">> = {
+  line: "line", lines: "line", level: "level", levels: "level", constant: "constant", constants: "constant",
+};
+
 /** Words naming a level as the lowest of its species. */
 export const GROUND_WORDS: readonly string[] = ["ground"];
 

@@ -1,13 +1,27 @@
-import { readFileSync, readdirSync, existsSync } from "node:fs";
+import { readFileSync, readdirSync } from "node:fs";
 import { join } from "node:path";
 import { gzipSync } from "node:zlib";
 import { beforeAll, describe, expect, it } from "vitest";
 import { mergeSearchData, searchData, searchIndexScript, type SearchData } from "../../src/site/searchIndex.js";
 import { SYNTHETIC_FIELDS, syntheticSearchAtlas } from "../../scripts/bench/syntheticSearchAtlas.js";
+import { packInts, unpackInts } from "../../src/site/searchCodec.js";
 import { demoSite } from "../support/runBuild.js";
 import { ASSET, clientContext, type ClientGlobal } from "./searchClient.js";
 
 const syntheticData = (): SearchData => mergeSearchData(syntheticSearchAtlas().map((s) => searchData(s, SYNTHETIC_FIELDS)));
+
+describe("packed lists of small integers", () => {
+  it("round-trip, and fall back to plain numbers outside −32 … 31", () => {
+    const doubled = [-31, -1, 0, 1, 3, 31, 17, -17];
+    expect(typeof packInts(doubled)).toBe("string");
+    expect(unpackInts(packInts(doubled))).toEqual(doubled);
+    expect(packInts([0, 32])).toEqual([0, 32]);
+    expect(unpackInts(packInts([-33, 5]))).toEqual([-33, 5]);
+    expect(packInts([])).toBe("");
+    // Only characters that JSON writes as they are.
+    expect(JSON.stringify(packInts(Array.from({ length: 64 }, (_, i) => i - 32)))).not.toMatch(/\\/);
+  });
+});
 
 describe("search data of a large synthetic atlas", () => {
   const data = syntheticData();
@@ -15,7 +29,7 @@ describe("search data of a large synthetic atlas", () => {
 
   it("has the intended size: 100 species, 2,000 levels, 5,000 lines, their sublevel transitions", () => {
     expect([data.species.length, data.levels.length, data.lines.length]).toEqual([100, 2000, 5000]);
-    expect(data.levels.reduce((n, l) => n + l[13].length / 5, 0)).toBeGreaterThan(100_000);
+    expect(data.levels.reduce((n, l) => n + unpackInts(l[12]).length / 5, 0)).toBeGreaterThan(100_000);
   });
 
   it("stays under 1 MB gzip", () => {
@@ -39,6 +53,19 @@ describe("search data of a large synthetic atlas", () => {
     const all = finder.search("F=2", 5);
     expect([all.total, all.capped, all.rows.length]).toEqual([1000, true, 5]);
   });
+
+  it("sends each kind of row to the page the build put it on", () => {
+    // As when an overview is too large and leaves the energies and the (F, mF) shifts to the level pages.
+    const [x0] = syntheticSearchAtlas();
+    const levelPage = "species/x0/level/4s-S1_2/index.html";
+    const moved = /^(field:|level:[^:]+:F=[^:]+:mF=)/;
+    const part = searchData({ ...x0!, pageOf: (rowId) => (moved.test(rowId) ? levelPage : "species/x0/index.html") }, SYNTHETIC_FIELDS);
+    const client = clientContext([{ code: searchIndexScript(mergeSearchData([part])) }, ASSET("finder.js")]);
+    const finder = client.AtlasFinder.createFinder(client.AtlasSearchData);
+    expect(finder.search("4s-S1/2 F=2 mF=1", 1).rows[0]!.href).toBe(`${levelPage}#level:4s-S1/2:F=2:mF=1`);
+    expect(finder.search("4s-S1/2 F=2", 1).rows[0]!.href).toBe("species/x0/index.html#level:4s-S1/2:F=2");
+    expect(finder.search("4s-S1/2 F=2 mF=1 1 T", 1).rows[0]!.href).toBe(`${levelPage}#field:4s-S1/2:F=2:mF=1`);
+  });
 });
 
 // The row kinds the finder covers, in the anchor forms of src/site/anchors.ts (ids cannot contain ":"):
@@ -58,36 +85,43 @@ describe("search data of the demo site", () => {
 
   const first = (q: string) => finder.search(q, 10).rows[0];
 
-  it("reaches every row of the kinds it indexes on every page that holds them, and nothing else", () => {
-    const speciesDir = join(site, "species");
-    const onPages = new Set<string>();
-    const scan = (path: string, rows: RegExp) => {
-      const html = readFileSync(join(site, path), "utf8");
-      for (const m of html.matchAll(/<tr id="([^"]+)"/g)) {
-        const rowId = m[1]!.replace(/&amp;/g, "&");
-        if (INDEXED_ROW.test(rowId) && rows.test(rowId)) onPages.add(`${path}#${rowId}`);
+  it("reaches every row of the kinds it indexes, each on a page that holds it, and nothing else", () => {
+    // Every HTML page of the site with the row ids on it (a row may be on the overview and on a detail page).
+    const idsOn = new Map<string, Set<string>>();
+    const walk = (dir: string) => {
+      for (const name of readdirSync(join(site, dir), { withFileTypes: true })) {
+        const path = dir ? `${dir}/${name.name}` : name.name;
+        if (name.isDirectory()) walk(path);
+        else if (name.name === "index.html") {
+          const html = readFileSync(join(site, path), "utf8");
+          idsOn.set(path, new Set([...html.matchAll(/<tr id="([^"]+)"/g)].map((m) => m[1]!.replace(/&amp;/g, "&"))));
+        }
       }
     };
-    const pagesIn = (dir: string, each: (page: string) => void) => {
-      if (!existsSync(join(site, dir))) return;
-      for (const name of readdirSync(join(site, dir))) {
-        if (existsSync(join(site, dir, name, "index.html"))) each(`${dir}/${name}/index.html`);
-        if (existsSync(join(site, dir, name, "transitions/index.html"))) each(`${dir}/${name}/transitions/index.html`);
-      }
-    };
-    for (const id of readdirSync(speciesDir)) {
-      const page = `species/${id}/index.html`;
-      if (!existsSync(join(site, page))) continue;
-      onPages.add(page);
-      // The overview: levels, sublevels, lines, energies at the fields (the level pages repeat the energies; the finder goes to the overview).
-      scan(page, /^(level:|line:[^:]+$|field:)/);
-      pagesIn(`species/${id}/line`, (p) => scan(p, /^line:[^:]+:mu=/));
-      pagesIn(`species/${id}/level`, (p) => scan(p, /^rf:/));
-    }
-    scan("constants/index.html", /^const:/);
+    walk("");
+    // The row ids of the kinds the finder covers, wherever they are (the bench sheets repeat none of them as row ids).
+    const onSite = new Set<string>();
+    for (const [path, ids] of idsOn) for (const id of ids) if (INDEXED_ROW.test(id) && !/(^|\/)sheet\//.test(path)) onSite.add(id);
     const targets = finder.all().map((r) => r.href);
     expect(new Set(targets).size).toBe(targets.length);
-    expect(new Set(targets)).toEqual(onPages);
+    const reached = new Set<string>();
+    for (const href of targets) {
+      const [page, id] = href.split("#") as [string, string | undefined];
+      expect(idsOn.has(page), href).toBe(true);
+      if (id === undefined) {
+        expect(page, href).toMatch(/^species\/[^/]+\/index\.html$/);
+        continue;
+      }
+      expect(idsOn.get(page)!.has(id), href).toBe(true);
+      reached.add(id);
+    }
+    expect(reached).toEqual(onSite);
+    // A row on the overview is reached there.
+    for (const href of targets) {
+      const [page, id] = href.split("#") as [string, string | undefined];
+      const overview = page.replace(/^(species\/[^/]+\/).*$/, "$1index.html");
+      if (id && page !== overview && idsOn.get(overview)?.has(id)) expect.fail(`${href} is on the overview too`);
+    }
   });
 
   it("puts exact ids and term symbols first", () => {
@@ -199,6 +233,10 @@ describe("search data of the demo site", () => {
     // D1 (²P1/2 → ²S1/2) has two π components, mJ = ±1/2 → ±1/2 (common practice).
     for (const r of finder.search("rb87 D1 pi", 100).rows) expect(r.answer).toBe("π");
     expect(finder.search("rb87 D1 π", 100).rows.length).toBe(2);
+    // "line" keeps a search to lines: the D lines of rubidium are D1 and D2 (common practice).
+    expect(finder.search("Rb D line", 10).rows.map((r) => r.href)).toEqual(["species/rb87/index.html#line:D1", "species/rb87/index.html#line:D2"]);
+    // "ground": the level listed without an energy while the others have one (data/species/rb87.yaml).
+    expect(first("87Rb ground F=2 mF=2")!.href).toBe("species/rb87/index.html#level:5s-S1/2:F=2:mF=2");
     // 729 nm of 40Ca+ is the quadrupole (E2) line (data/species/ca40-ion.yaml).
     expect(first("ca40 729 E2")!.href).toBe("species/ca40-ion/index.html#line:729");
   });
