@@ -21,10 +21,14 @@ export function packInts(values: readonly number[]): string | number[] {
   return out;
 }
 
+/** Value of each character code of the alphabet. */
+const VALUE = new Int8Array(128);
+for (let i = 0; i < ALPHABET.length; i++) VALUE[ALPHABET.charCodeAt(i)] = i - OFFSET;
+
 /** The list back from packInts. */
 export function unpackInts(packed: string | readonly number[]): number[] {
   if (typeof packed !== "string") return [...packed];
   const out: number[] = new Array(packed.length);
-  for (let i = 0; i < packed.length; i++) out[i] = ALPHABET.indexOf(packed[i]!) - OFFSET;
+  for (let i = 0; i < packed.length; i++) out[i] = VALUE[packed.charCodeAt(i)]!;
   return out;
 }
