@@ -83,8 +83,12 @@ export interface LineInput {
   id: string;
   upper: string;
   lower: string;
-  /** Vacuum wavelength (m), if given. */
+  /** Vacuum wavelength (m), if given; converted from air when the file gives it in air. */
   wavelength: Quantity | null;
+  /** The medium the file gives the wavelength in (vacuum when not said). */
+  medium: "vacuum" | "air";
+  /** Wavelength in standard air (m), given or converted; null without a wavelength or outside the air formula's range (physics/airWavelength.ts). */
+  airWavelength: Quantity | null;
   multipole: Multipole;
   source: string | null;
   notes: string | null;

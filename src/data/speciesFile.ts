@@ -9,6 +9,8 @@ import { ITEM_ID, ITEM_ID_HINT, SPECIES_ID, SPECIES_ID_HINT, pageSlug, suggestSp
 import type { Place } from "./inputError.js";
 import { MULTIPOLES, multipoleRuleBreak } from "./lineRules.js";
 import type { HyperfineInput, LevelInput, LineInput, Measured, Multipole, NucleusInput, Quantity, SpeciesInput } from "./model.js";
+import { airToVacuum, inAirFormulaRange, vacuumToAir } from "../physics/airWavelength.js";
+import type { Dec } from "../physics/decimal.js";
 import { MOMENT_UNITS, parseMeasured, parseQuantity, type UnitTable } from "./numberText.js";
 import type { Parsed } from "./parsed.js";
 import { parseTermSymbol } from "./termSymbol.js";
@@ -19,7 +21,8 @@ export const SPECIES_KEYS = ["id", "label", "mass", "nucleus", "notes", "levels"
 export const NUCLEUS_KEYS = ["spin", "gI", "moment", "source"] as const;
 export const LEVEL_KEYS = ["id", "config", "term", "gJ", "hyperfine", "energy", "source", "notes"] as const;
 export const HYPERFINE_KEYS = ["A", "B"] as const;
-export const LINE_KEYS = ["id", "upper", "lower", "wavelength", "multipole", "source", "notes"] as const;
+export const LINE_KEYS = ["id", "upper", "lower", "wavelength", "medium", "multipole", "source", "notes"] as const;
+export const MEDIA = ["vacuum", "air"] as const;
 
 /** What a species file yields: the species if valid, and its id (for cross-file checks) if readable. */
 export interface SpeciesRead {
@@ -288,7 +291,22 @@ class SpeciesReader {
     const upperText = r.text("upper", true, "add the id of the upper level, e.g. upper: 5p-P3/2");
     const lowerText = r.text("lower", true, "add the id of the lower level, e.g. lower: 5s-S1/2");
     const wlText = r.text("wavelength", false);
-    const wavelength = this.positive(this.quantity(wlText, "length", "wavelength"), wlText, "wavelength", "a vacuum wavelength is positive, e.g. 780.241209686 nm");
+    const given = this.positive(this.quantity(wlText, "length", "wavelength"), wlText, "wavelength", "a wavelength is positive, e.g. 780.241209686 nm");
+    const mediumText = r.text("medium", false);
+    let medium: LineInput["medium"] = "vacuum";
+    if (mediumText) {
+      const m = MEDIA.find((x) => x === mediumText.text);
+      if (m) medium = m;
+      else {
+        const guess = didYouMean(mediumText.text, MEDIA);
+        this.add(mediumText.at, `unknown medium "${mediumText.text}"`, `${guess ? `did you mean ${guess}? ` : ""}medium is vacuum (when left out) or air (standard air, 15 °C, 101 325 Pa)`);
+      }
+      if (!wlText) this.add(mediumText.at, `medium: ${mediumText.text} without a wavelength`, "give the wavelength, e.g. wavelength: \"630.2494 nm\", or leave medium out");
+    }
+    if (given && wlText && medium === "air" && !inAirFormulaRange(given.si)) {
+      this.add(wlText.at, `air wavelength ${wlText.text} is outside the range of the air formula (200 nm to 2 µm)`, "give the vacuum wavelength and leave medium out (or write medium: vacuum)");
+    }
+    const { wavelength, airWavelength } = bothMedia(given, medium);
     const mpText = r.text("multipole", false);
     let multipole: Multipole = "E1";
     if (mpText) {
@@ -325,12 +343,40 @@ class SpeciesReader {
       upper: upperText.text,
       lower: lowerText.text,
       wavelength,
+      medium,
+      airWavelength,
       multipole,
       source: source?.text ?? null,
       notes: notes?.text ?? null,
       pos: { file: this.shownFile, line: id.at.line, column: id.at.column },
     };
   }
+}
+
+/**
+ * The vacuum and the standard-air wavelength of a line from the one given
+ * (physics/airWavelength.ts). The converted one is written in the given
+ * unit to as many significant digits as the given one (at most 10: the air
+ * formula holds to a few parts in 10⁹); its si value keeps every digit.
+ * No air wavelength outside the formula's range.
+ */
+function bothMedia(given: Quantity | null, medium: LineInput["medium"]): { wavelength: Quantity | null; airWavelength: Quantity | null } {
+  if (!given) return { wavelength: null, airWavelength: null };
+  if (medium === "air") {
+    if (!inAirFormulaRange(given.si)) return { wavelength: null, airWavelength: null };
+    return { wavelength: converted(given, airToVacuum(given.si)), airWavelength: given };
+  }
+  return { wavelength: given, airWavelength: inAirFormulaRange(given.si) ? converted(given, vacuumToAir(given.si)) : null };
+}
+
+function converted(given: Quantity, si: Dec): Quantity {
+  const mantissa = (/^[+-]?([\d.]+)/.exec(given.text.trim())?.[1] ?? "").replace(".", "").replace(/^0+/, "");
+  const digits = Math.min(10, Math.max(1, mantissa.length));
+  const value = si.mul(given.value).div(given.si);
+  const shown = value.toSignificantDigits(digits);
+  const uncertainty = given.uncertainty === null ? null : given.uncertainty.mul(value).div(given.value);
+  const siUncertainty = given.siUncertainty === null ? null : given.siUncertainty.mul(si).div(given.si);
+  return { value, uncertainty, text: `${shown.toFixed(Math.max(0, digits - 1 - shown.e))} ${given.unit}`, unit: given.unit, si, siUncertainty };
 }
 
 function jKind(J2: number): string {

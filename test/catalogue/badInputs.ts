@@ -360,6 +360,10 @@ export const BAD_INPUTS: readonly BadInput[] = [
   { name: "unknown unit", files: () => rb(edit(RB87, `"780.241209686 nm"`, `"780.241209686 nmm"`)), expect: at(R, 38, 17, /wavelength: unknown unit "nmm" in "780\.241209686 nmm"; wavelength needs a length unit; length units are m,/) },
   { name: "wavelength without a unit", files: () => rb(edit(RB87, `"780.241209686 nm"`, `"780.241209686"`)), expect: at(R, 38, 17, /wavelength: "780\.241209686" has no unit; write wavelength as "<number> <unit>"/) },
   { name: "number glued to its unit", files: () => rb(edit(RB87, `"780.241209686 nm"`, `"780.241209686nm"`)), expect: at(R, 38, 17, /wavelength: "780\.241209686nm" needs a space between number and unit; write "780\.241209686 nm"/) },
+  // --- air and vacuum wavelengths (issue 11, section 2)
+  { name: "unknown medium", files: () => rb(edit(RB87, `"780.241209686 nm"\n`, `"780.241209686 nm"\n    medium: vaccum\n`)), expect: at(R, 39, 13, /unknown medium "vaccum"; did you mean vacuum\? medium is vacuum \(when left out\) or air/) },
+  { name: "medium without a wavelength", files: () => rb(edit(RB87, `wavelength: "780.241209686 nm"`, `medium: air`)), expect: at(R, 38, 13, /medium: air without a wavelength; give the wavelength/) },
+  { name: "air wavelength outside the air formula", files: () => rb(edit(RB87, `"780.241209686 nm"\n`, `"150 nm"\n    medium: air\n`)), expect: at(R, 38, 17, /air wavelength 150 nm is outside the range of the air formula \(200 nm to 2 µm\); give the vacuum wavelength/) },
   { name: "energy in a length unit", files: () => rb(edit(RB87, `energy: "12578.950 cm-1"`, `energy: "794.98 nm"`)), expect: at(R, 21, 13, /energy: "nm" is a length unit, not a frequency unit/) },
   // --- term symbols
   { name: "unknown L letter", files: () => rb(edit(RB87, "term: 2S1/2", "term: 2X1/2")), expect: at(R, 13, 11, /term: "X" is not an L letter \(term "2X1\/2"\); L letters are S P D F G H I K/) },
