@@ -78,7 +78,7 @@ function tablesOf(view: PageView): Table[] {
         ...view.terms.flatMap((t) => (t.table ? [t.table] : [])),
       ];
     case "level":
-      return [...(view.sublevelShifts ? [view.sublevelShifts] : []), view.energies, ...(view.transitions ? [view.transitions] : [])];
+      return [...view.sublevelShifts, view.energies, ...(view.transitions ? [view.transitions] : [])];
     case "transitions":
       return view.transitions ? [view.transitions] : [];
     case "term":
@@ -114,7 +114,7 @@ export function buildSpecies(input: SpeciesInput, ctx: SpeciesBuildContext): Spe
   let compact: OverviewCompaction = 0;
   let overview = timed("views", () => overviewView(v, compact));
   let overviewHtml = render(overview, overviewMoved);
-  while (tooLarge(overviewHtml, OVERVIEW_LIMIT) && compact < 4) {
+  while (tooLarge(overviewHtml, OVERVIEW_LIMIT) && compact < 5) {
     compact = (compact + 1) as OverviewCompaction;
     overview = timed("views", () => overviewView(v, compact));
     overviewHtml = render(overview, overviewMoved);

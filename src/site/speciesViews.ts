@@ -101,8 +101,8 @@ export interface LevelView extends PageCommon {
   /** Position of the level in the species (1-based): keeps the plot switch ids of the one-page layout. */
   axisIndex: number;
   facts: string[];
-  /** The (F, mF) linear shifts, here when the overview leaves them to the level page (OverviewCompaction 2). */
-  sublevelShifts: Table | null;
+  /** The linear shift tables the overview leaves to the level page: (F, mF) from OverviewCompaction 2, mJ and F from 5. */
+  sublevelShifts: Table[];
   energies: Table;
   plots: { linear: string; log: string } | null;
   transitions: Table | null;
@@ -227,11 +227,12 @@ export const hasLevelPage = (s: SpeciesFieldResult, l: LevelResult): boolean => 
  * overview stays under its budget: 0 nothing; 1 the energies at the bias
  * fields of levels that have a page; 2 also their (F, mF) shift tables;
  * 3 also the fine-structure term tables (to term pages); 4 also the pattern
- * pictures (each line page has its own). The
+ * pictures (each line page has its own); 5 also the mJ and F tables of
+ * levels with a page (the at-a-glance table keeps every g and shift per m). The
  * rows keep their ids on the level pages, and the overview's forwarding map
  * sends old links there.
  */
-export type OverviewCompaction = 0 | 1 | 2 | 3 | 4;
+export type OverviewCompaction = 0 | 1 | 2 | 3 | 4 | 5;
 
 export function overviewView(v: SpeciesViewsInput, compact: OverviewCompaction = 0): OverviewView {
   const s = v.result;
@@ -274,11 +275,13 @@ export function overviewView(v: SpeciesViewsInput, compact: OverviewCompaction =
         termParts: termParts(l.input.term),
         title: l.input.id,
         levelUrl: levelUrl(l),
-        tables: [
-          mJTable(l, home),
-          ...(l.hyperfine.length > 0 ? [hyperfineTable(l, home)] : []),
-          ...(l.hyperfine.length > 0 && !(compact >= 2 && levelUrl(l)) ? [hyperfineSublevelsTable(l, home)] : []),
-        ],
+        tables: compact >= 5 && levelUrl(l)
+          ? []
+          : [
+              mJTable(l, home),
+              ...(l.hyperfine.length > 0 ? [hyperfineTable(l, home)] : []),
+              ...(l.hyperfine.length > 0 && !(compact >= 2 && levelUrl(l)) ? [hyperfineSublevelsTable(l, home)] : []),
+            ],
       };
     }),
     lines: linesTable(s, home),
@@ -339,7 +342,7 @@ export function levelViews(
       anchor: levelFieldSectionAnchor(l.input.id),
       axisIndex: i + 1,
       facts: validityFacts(f),
-      sublevelShifts: compact >= 2 ? hyperfineSublevelsTable(l, home) : null,
+      sublevelShifts: [...(compact >= 5 ? [mJTable(l, home), hyperfineTable(l, home)] : []), ...(compact >= 2 ? [hyperfineSublevelsTable(l, home)] : [])],
       energies: energiesTable(l, f, v.configured, home, true),
       plots: levelPlots(l, f, v.configured),
       transitions: separate ? null : table,
