@@ -11,6 +11,7 @@ import { effectiveLande, lineComponents, multipoleRank, patternNotation, pattern
 import { mValues } from "../physics/quantum.js";
 import { Rational } from "../physics/rational.js";
 import { SPEED_OF_LIGHT } from "../physics/units.js";
+import { lorentzWavelengthPerTesla } from "../physics/airWavelength.js";
 import { linearShiftPerTesla } from "../physics/zeeman.js";
 import type { LevelInput, NucleusInput, SpeciesInput } from "../data/model.js";
 import type { LevelResult, LineResult, SpeciesResult } from "./types.js";
@@ -79,6 +80,7 @@ export function computeSpecies(species: SpeciesInput, c: ConstantsEdition): Spec
       summary: patternSummary(components, k),
       components,
       frequencyHz: line.wavelength ? SPEED_OF_LIGHT.div(line.wavelength.si) : null,
+      lorentzDlambdaPerT: line.wavelength ? lorentzWavelengthPerTesla(line.wavelength.si, val(c.muB_hc)) : null,
     };
   });
   return {

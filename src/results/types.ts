@@ -56,6 +56,8 @@ export interface LineResult {
   components: PatternComponent[];
   /** Line frequency c/λ (Hz) when a wavelength is given. */
   frequencyHz: Dec | null;
+  /** Wavelength shift of one Lorentz unit per tesla, λ_vac²·μB/(hc) (m/T), when a wavelength is given (physics/airWavelength.ts). */
+  lorentzDlambdaPerT: Dec | null;
 }
 
 export interface SpeciesResult {

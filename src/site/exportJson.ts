@@ -12,6 +12,7 @@ import type { SpeciesFieldResult } from "../results/computeFields.js";
 import type { ConfiguredField, LevelFieldResult, LineFieldResult } from "../results/fieldTypes.js";
 import { absoluteFrequency, lockPoints, vacuumWavelength } from "../physics/lockPoints.js";
 import { SPEED_OF_LIGHT } from "../physics/units.js";
+import { PM, sigmaCentroidSeparation } from "./wavelengthSplitting.js";
 
 export const EXPORT_DIGITS = 30;
 export const EXPORT_FORMAT = "sublevel-atlas/export@1";
@@ -167,6 +168,8 @@ export function speciesExport(s: SpeciesResult, ctx: ExportContext, fields?: { r
       lower: ln.lower.input.id,
       multipole: ln.input.multipole,
       wavelength_m: ln.input.wavelength ? num(ln.input.wavelength.si) : null,
+      wavelength_medium: ln.input.medium,
+      air_wavelength_m: ln.input.airWavelength ? num(ln.input.airWavelength.si) : null,
       frequency_Hz: num(ln.frequencyHz),
       g_eff: num(ln.gEff),
       pattern: ln.pattern,
@@ -181,6 +184,11 @@ export function speciesExport(s: SpeciesResult, ctx: ExportContext, fields?: { r
         shift_Hz_per_T: num(c.shiftHzPerT),
         strength: c.strength.toString(),
       })),
+      lorentz_dlambda_pm_per_T: ln.lorentzDlambdaPerT ? num(ln.lorentzDlambdaPerT.mul(PM)) : null,
+      sigma_separation_at_fields: (fields?.configured ?? []).map((b) => {
+        const sep = sigmaCentroidSeparation(ln, b.tesla);
+        return { B_T: fieldText(b.tesla), B_text: b.text, centroid_separation_pm: sep ? num(sep.mul(PM)) : null };
+      }),
       ...lineExtra(ln.input.id, ln.frequencyHz),
     })),
   };
