@@ -356,8 +356,8 @@ class SpeciesReader {
 /**
  * The vacuum and the standard-air wavelength of a line from the one given
  * (physics/airWavelength.ts). The converted one is written in the given
- * unit to as many significant digits as the given one (at most 10: the air
- * formula holds to a few parts in 10⁹); its si value keeps every digit.
+ * unit to as many significant digits as the given one (at most 10; the air
+ * formula itself holds to about 1e-8 in n); its si value keeps every digit.
  * No air wavelength outside the formula's range.
  */
 function bothMedia(given: Quantity | null, medium: LineInput["medium"]): { wavelength: Quantity | null; airWavelength: Quantity | null } {

@@ -11,10 +11,10 @@
  *   σ = 1/λ_vac in µm⁻¹ (the vacuum wavenumber),
  *
  * and λ_air = λ_vac / n. The constants are quoted from memory of the
- * published formula. The formula is an empirical fit: it is not exact, it
- * holds to a few parts in 10⁹ of λ against the measurements it was fitted
- * to, between about 200 nm and 2 µm; outside that range this module gives
- * no air wavelength.
+ * published formula. The formula is an empirical fit: it is not exact; it
+ * holds to about 1e-8 in n against the measurements it was fitted to,
+ * between about 200 nm and 2 µm; outside that range this module gives no
+ * air wavelength.
  */
 import { Dec, ONE } from "./decimal.js";
 

@@ -38,6 +38,10 @@ export const lineComponentsAnchor = (lineId: string) => `line:${lineId}-componen
 export const lineFieldsAnchor = (lineId: string) => `line:${lineId}-fields`;
 /** A line at one bias field; `tesla` as exported ("0.0001"). */
 export const lineAtFieldAnchor = (lineId: string, tesla: string) => `line:${lineId}:B=${tesla}T`;
+/** A line's splitting in wavelength at one bias field (line page, issue 11). */
+export const lineDlambdaAnchor = (lineId: string, tesla: string) => `line:${lineId}:dlambda:B=${tesla}T`;
+/** The section of a line's splitting in wavelength (line page). */
+export const lineDlambdaSectionAnchor = (lineId: string) => `line:${lineId}-wavelength-splitting`;
 /**
  * One component of a line at a field, named by its two states ("F=2, mF=1"
  * → "F=2,mF=1"). A pair of field eigenstates has one component at most

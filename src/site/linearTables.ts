@@ -7,7 +7,7 @@
 import { Dec, exportText } from "../physics/decimal.js";
 import { hzPerTeslaToGHzPerTesla, hzPerTeslaToMHzPerGauss, hzPerTeslaToWavenumberPerTesla } from "../physics/zeeman.js";
 import { formatDoubled } from "../physics/quantum.js";
-import type { Quantity } from "../data/model.js";
+import type { LineInput, Quantity } from "../data/model.js";
 import { pageSlug } from "../data/ids.js";
 import type { HyperfineLevelResult, LevelResult, LineResult, SpeciesResult } from "../results/types.js";
 import { componentAnchor, hyperfineAnchor, levelAnchor, levelShiftsAnchor, lineAnchor, mFAnchor, mJAnchor } from "./anchors.js";
@@ -66,6 +66,12 @@ export function quantityCell(q: Quantity | null | undefined, unit: string, siPer
   const value = q.si.div(siPerUnit);
   if (q.unit === unit) return measuredCell(q, value, numberText);
   return numberCell(value, writtenDigits(numberText));
+}
+
+/** A line's wavelength in standard air (given or converted), or the words saying the air formula does not reach it. */
+export function airWavelengthCell(input: Pick<LineInput, "wavelength" | "airWavelength">): Cell {
+  if (input.wavelength && !input.airWavelength) return textCell("outside the range of the air formula");
+  return quantityCell(input.airWavelength, "nm", "1e-9");
 }
 
 /** Levels of a species; the id links to the level's own page where it has one, else to its shifts. */
@@ -216,6 +222,7 @@ export function linesTable(s: SpeciesResult, home: TableHome): Table {
         { key: "lower", label: "lower", kind: "text", cell: (ln) => textCell(ln.lower.input.id, `#${levelAnchor(ln.lower.input.id)}`) },
         { key: "multipole", label: "multipole", kind: "text", cell: (ln) => textCell(ln.input.multipole) },
         { key: "wavelength", label: "λ (vacuum)", unit: "nm", kind: "number", cell: (ln) => quantityCell(ln.input.wavelength, "nm", "1e-9") },
+        { key: "air_wavelength", label: "λ (air)", unit: "nm", kind: "number", when: s.lines.some((ln) => ln.input.wavelength), cell: (ln) => airWavelengthCell(ln.input) },
         { key: "g_eff", label: "g_eff", kind: "number", cell: (ln) => numberCell(ln.gEff, SHOWN_DIGITS) },
         { key: "pattern", label: "pattern", kind: "text", cell: (ln) => textCell(ln.pattern ?? "—") },
         { key: "summary", label: "reading", kind: "note", cell: (ln) => textCell(ln.summary) },

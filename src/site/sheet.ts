@@ -182,7 +182,11 @@ export function speciesSheet(s: SpeciesResult, opts: SheetOptions, fields?: { re
       columns: [
         { key: "line", label: "line", kind: "text", cell: (ln) => textCell(ln.input.id) },
         { key: "transition", label: "upper → lower", kind: "text", when: opts.mList, cell: (ln) => textCell(`${ln.upper.input.id} → ${ln.lower.input.id}`) },
-        { key: "wavelength", label: "λ", unit: "nm", kind: "number", cell: (ln) => (ln.input.wavelength ? wavelengthCell(ln.input.wavelength) : numberCell(null)) },
+        { key: "wavelength", label: "λ (vacuum)", unit: "nm", kind: "number", cell: (ln) => (ln.input.wavelength ? wavelengthCell(ln.input.wavelength) : numberCell(null)) },
+        {
+          key: "air_wavelength", label: "λ (air)", unit: "nm", kind: "number", when: s.lines.some((ln) => ln.input.wavelength),
+          cell: (ln) => (ln.input.airWavelength ? wavelengthCell(ln.input.airWavelength) : ln.input.wavelength ? textCell("outside the air formula") : numberCell(null)),
+        },
         { key: "g_eff", label: "g_eff", kind: "number", cell: (ln) => numberCell(ln.gEff, SHEET_DIGITS) },
         { key: "pattern", label: "pattern", kind: "text", cell: (ln) => textCell(ln.pattern ?? "—") },
         { key: "components", label: "components: shift in Lorentz units (strength)", kind: "text", when: opts.mList, cell: (ln) => textCell(componentList(ln)) },

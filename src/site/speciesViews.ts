@@ -56,6 +56,8 @@ import {
 import { exportPath, levelPagePath, lineFieldPagePath, linePagePath, sheetPath, speciesPath, termPagePath } from "./pageUrls.js";
 import { patternSketchSvg } from "./plots/patternSketch.js";
 import { lockView, type LockView } from "./lockTables.js";
+import { lorentzWavelengthText, wavelengthSplitTable, wavelengthsText } from "./wavelengthSplitting.js";
+import { lineDlambdaSectionAnchor } from "./anchors.js";
 import { termParts, type Cell, type Table, type TermParts } from "./table.js";
 
 /** One step of the breadcrumb trail; the last has no link. */
@@ -148,6 +150,10 @@ export interface LineView extends PageCommon {
   hyperfineComponents: Table | null;
   /** Saturated-absorption lock points with the reference choice; null without hyperfine groups or without a wavelength. */
   lock: LockView | null;
+  /** Vacuum and air wavelengths in words (under the heading); null without a wavelength. */
+  wavelengths: string | null;
+  /** The Zeeman splitting in wavelength: a sentence and a table per bias field; null without a wavelength. */
+  wavelengthSplit: { anchor: string; text: string; table: Table } | null;
   /** The line at each bias field, on this page; or null when they have pages of their own (fieldLinks). */
   atFields: AtFieldView[] | null;
   fieldLinks: { text: string; url: string; regime: string; model: string }[];
@@ -451,6 +457,10 @@ export function lineViews(
       hyperfine: f.hyperfine ? hyperfineGroupsTable(ln, f.hyperfine, home) : null,
       hyperfineComponents: f.hyperfine ? hyperfineComponentsTable(ln, f.hyperfine, home) : null,
       lock: lockView(ln, f.hyperfine, home),
+      wavelengths: wavelengthsText(ln.input),
+      wavelengthSplit: ln.lorentzDlambdaPerT
+        ? { anchor: lineDlambdaSectionAnchor(ln.input.id), text: lorentzWavelengthText(ln)!, table: wavelengthSplitTable(ln, v.configured, home)! }
+        : null,
       atFields: separate ? null : atFields,
       fieldLinks: separate
         ? positive.map((a) => ({ text: a.field.text, url: `/${lineFieldPagePath(id, ln.input.id, exportText(a.field.tesla, 30))}`, regime: a.regime, model: a.model }))

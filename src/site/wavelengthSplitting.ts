@@ -3,8 +3,15 @@
  * export: one Lorentz unit per tesla (LineResult.lorentzDlambdaPerT) and the
  * separation of the σ+ and σ− centroids at a field.
  */
-import type { Dec } from "../physics/decimal.js";
+import { exportText, type Dec } from "../physics/decimal.js";
+import type { LineInput } from "../data/model.js";
+import type { ConfiguredField } from "../results/fieldTypes.js";
 import type { LineResult } from "../results/types.js";
+import { lineDlambdaAnchor } from "./anchors.js";
+import { csvName, type TableHome } from "./linearTables.js";
+import { numberCell, textCell, type Table } from "./table.js";
+import { makeTable } from "./tableSpec.js";
+import { formatNumber } from "./format.js";
 
 /** pm per m; 1 pm/T is also 1 mÅ/kG. */
 export const PM = "1e12";
@@ -20,4 +27,54 @@ export const PM = "1e12";
 export function sigmaCentroidSeparation(ln: Pick<LineResult, "gEff" | "lorentzDlambdaPerT">, tesla: Dec): Dec | null {
   if (ln.gEff === null || ln.lorentzDlambdaPerT === null) return null;
   return ln.gEff.abs().mul(2).mul(ln.lorentzDlambdaPerT).mul(tesla);
+}
+
+/** Vacuum and air wavelengths of a line in words, for the line page under its heading; null without a wavelength. */
+export function wavelengthsText(input: LineInput): string | null {
+  const vac = input.wavelength;
+  if (!vac) return null;
+  const given = (m: LineInput["medium"]) => (input.medium === m ? " (as given)" : "");
+  const vacText = `${vac.text} in vacuum${given("vacuum")}`;
+  const air = input.airWavelength;
+  return air ? `λ = ${vacText}, ${air.text} in standard air${given("air")}` : `λ = ${vacText}; in air: outside the range of the air formula (200 nm to 2 µm)`;
+}
+
+/**
+ * The Zeeman splitting of a line in wavelength at each configured field
+ * (above zero): one Lorentz unit and the σ centroid separation, in pm
+ * and mÅ. Null without a wavelength.
+ */
+export function wavelengthSplitTable(ln: LineResult, fields: ConfiguredField[], home: TableHome): Table | null {
+  const perT = ln.lorentzDlambdaPerT;
+  if (perT === null) return null;
+  const rows = fields.filter((f) => f.tesla.gt(0));
+  const pm = (x: Dec | null) => (x === null ? null : x.mul(PM));
+  return makeTable<ConfiguredField>(
+    {
+      id: `dlambda:${ln.input.id}`,
+      caption: `${ln.input.id}: Zeeman splitting in wavelength at the bias fields`,
+      csvPath: csvName(home, ln.input.id, "wavelength-splitting"),
+      exportUrl: home.exportUrl,
+      anchor: (f) => lineDlambdaAnchor(ln.input.id, exportText(f.tesla, 30)),
+      columns: [
+        { key: "B", label: "field", kind: "text", cell: (f) => textCell(f.text) },
+        { key: "lorentz", label: "one Lorentz unit", unit: "pm", kind: "number", cell: (f) => numberCell(pm(perT.mul(f.tesla)), 6) },
+        { key: "sigma", label: "σ+ to σ− centroids", unit: "pm", kind: "number", cell: (f) => numberCell(pm(sigmaCentroidSeparation(ln, f.tesla)), 6) },
+        { key: "sigmaA", label: "σ+ to σ− centroids", unit: "mÅ", kind: "number", cell: (f) => numberCell(pm(sigmaCentroidSeparation(ln, f.tesla))?.mul(10) ?? null, 6) },
+      ],
+    },
+    rows,
+  );
+}
+
+/** One Lorentz unit in wavelength per field, in words, for the line page; null without a wavelength. */
+export function lorentzWavelengthText(ln: LineResult): string | null {
+  const perT = ln.lorentzDlambdaPerT;
+  if (perT === null) return null;
+  const v = formatNumber(perT.mul(PM), 6);
+  const sigma =
+    ln.gEff === null
+      ? ""
+      : ` The σ+ and σ− components' strength-weighted centroids lie 2·|g_eff| = ${formatNumber(ln.gEff.abs().mul(2), 6)} Lorentz units apart (linear pattern, hyperfine structure not resolved).`;
+  return `A shift of one Lorentz unit (μB·B/h) moves the line by ${v} pm/T = ${v} mÅ/kG in wavelength (λ²·μB/(hc) with the vacuum wavelength; in air smaller by the factor n, 3 × 10⁻⁴); toward shorter wavelength for a positive shift.${sigma}`;
 }
