@@ -56,8 +56,9 @@ function targetRow(): HTMLTableRowElement | null {
 export function land(column: string | undefined = rememberedColumn()): void {
   const row = targetRow();
   if (!row) return;
-  // A row inside a folded block is shown.
+  // A row inside a folded block is shown, and so is a row a table filter had hidden (tables.ts).
   for (let d = row.closest("details"); d; d = d.parentElement?.closest("details") ?? null) d.open = true;
+  if (row.hidden) (row.closest("table") as (HTMLTableElement & { atlasClearFilter?: () => void }) | null)?.atlasClearFilter?.();
   for (const old of Array.from(document.querySelectorAll(".landed, .landed-cell"))) old.classList.remove("landed", "landed-cell");
   row.classList.add("landed");
   const table = row.closest("table")!;
@@ -81,16 +82,20 @@ export function land(column: string | undefined = rememberedColumn()): void {
   cell.classList.add("landed-cell");
   const first = row.cells[0];
   const pinned = first && getComputedStyle(first).position === "sticky" && first !== cell ? first.getBoundingClientRect().width : 0;
+  // The visible part of the box right of the pinned column (the window may cut the box on a phone).
   const w = wrap.getBoundingClientRect();
-  let c = cell.getBoundingClientRect();
-  if (c.right > w.right) wrap.scrollLeft += c.right - w.right + GAP;
-  c = cell.getBoundingClientRect();
-  if (c.left < w.left + pinned) wrap.scrollLeft -= w.left + pinned - c.left + GAP;
+  const from = w.left + pinned;
+  const to = Math.min(w.right, document.documentElement.clientWidth);
+  const c = cell.getBoundingClientRect();
+  // A cell that fits is shown whole; a wider one from its start, where the answer begins.
+  if (c.width > to - from - GAP || c.left < from) wrap.scrollLeft += c.left - from - GAP;
+  else if (c.right > to) wrap.scrollLeft += c.right - to + GAP;
 }
 
 /** Land now, again once everything is laid out (fonts, the browser's own jump), and on every change of the #. */
 export function initLanding(): void {
   land();
   window.addEventListener("load", () => land());
-  window.addEventListener("hashchange", () => land());
+  // After the other scripts' own handlers of the same change (a filter cleared, a row scrolled to).
+  window.addEventListener("hashchange", () => requestAnimationFrame(() => land()));
 }
