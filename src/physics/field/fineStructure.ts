@@ -30,8 +30,11 @@
  * plus a near-constant A·mJ·mI correction describe the levels. It is NOT fine
  * near zero field for levels whose hyperfine structure is resolved, nor for
  * heavy atoms or light ones with very small fine-structure intervals where the
- * two scales meet (e.g. the 2P term of Li, with a 10 GHz interval); use
- * hyperfineZeeman.ts per J level there.
+ * two scales meet (e.g. the 2P term of Li, with a 10 GHz interval). The
+ * build's energies, transitions and lines of such levels come from the term
+ * solver (termHyperfineZeeman.ts, hyperfine within each J); this module
+ * gives the fine-structure states alone (a term's Paschen–Back table) and
+ * the field where the J-resolved linear pattern is off by 1 %.
  *
  * References: E. U. Condon and G. H. Shortley, "The Theory of Atomic Spectra"
  * (1935), §16.3 (the Paschen–Back effect); H. A. Bethe and E. E. Salpeter,

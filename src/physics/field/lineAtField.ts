@@ -28,6 +28,7 @@ import { threeJ, sixJ, type SignedRoot } from "../wigner.js";
 import { polarizationOf, type Polarization } from "../linePattern.js";
 import type { FieldState } from "./hyperfineZeeman.js";
 import type { FineStructureState } from "./fineStructure.js";
+import type { TermFieldState } from "./termHyperfineZeeman.js";
 
 /** One amplitude of a state on the uncoupled basis |J mJ mI⟩ (doubled quantum numbers). */
 export interface BasisAmplitude {
@@ -94,6 +95,40 @@ export function lsReducedElement(Lu: number, Ll: number, S2: number, k: number):
     const sign = ((Math.abs(phase) % 2 === 0 ? 1 : -1) * w.sign) as -1 | 1;
     return signedRootToDec({ sign, squared: w.squared.mul(Rational.of((Ju2 + 1) * (Jl2 + 1))) });
   };
+}
+
+/**
+ * Reduced elements for a line whose transition operator is known between
+ * its own two levels only: 1 between (Ju, Jl) of the line, 0 between any
+ * other J of the levels' terms. Used where the LS relation above does not
+ * apply (a change of spin, or an M1 line, whose spin part it does not
+ * cover): amplitudes of a mixed state on other J then add no transition
+ * strength of their own. Exact. Selection rules: none beyond the line's pair.
+ * Worked example: ownPairReducedElement(3, 1) gives 1 for (3/2, 1/2) and 0
+ * for (1/2, 1/2).
+ */
+export function ownPairReducedElement(Ju2: number, Jl2: number): ReducedElement {
+  return (a, b) => (a === Ju2 && b === Jl2 ? new Dec(1) : ZERO);
+}
+
+/** Which reduced elements a line's components at a field use (src/results/lineModel.ts decides). */
+export type ReducedElementKind = "LS" | "own J pair";
+
+/**
+ * The reduced elements of a line between the J of its levels' terms: the LS
+ * ones (lsReducedElement, Edmonds eq. 7.1.7) when `kind` is "LS" and they
+ * do not vanish for the line's own pair (Ju, Jl); otherwise the line's own
+ * pair (ownPairReducedElement), so that a line listed between levels that
+ * LS coupling would not connect still has its components. Exact as the two
+ * functions. Worked example: Na D2 (2P3/2 → 2S1/2, E1, "LS") gives the LS
+ * elements, ⟨3/2‖‖1/2⟩² : ⟨1/2‖‖1/2⟩² = 2 : 1.
+ */
+export function lineReducedElement(kind: ReducedElementKind, Lu: number, Ll: number, S2: number, k: number, Ju2: number, Jl2: number): ReducedElement {
+  if (kind === "LS") {
+    const ls = lsReducedElement(Lu, Ll, S2, k);
+    if (!ls(Ju2, Jl2).isZero()) return ls;
+  }
+  return ownPairReducedElement(Ju2, Jl2);
 }
 
 /**
@@ -213,19 +248,49 @@ function half(x2: number): string {
 }
 
 /**
- * Line states from the hyperfine–Zeeman solver (one J level with nuclear spin).
- * Energies stay relative to the hyperfine-free level centre, which is the
- * zero-field line centre of the J-resolved line. Exact: copies only.
+ * The label of a sublevel in a line's components: "F=2, mF=1" with nuclear
+ * spin (I2 > 0), "mJ=1/2" without (F = J, mF = mJ; the form the J-resolved
+ * linear pattern uses). Exact: text only.
+ */
+export function sublevelLabel(I2: number, F2: number, mF2: number): string {
+  return I2 > 0 ? `F=${half(F2)}, mF=${half(mF2)}` : `mJ=${half(mF2)}`;
+}
+
+/**
+ * Line states from the hyperfine–Zeeman solver (one J level, with nuclear
+ * spin or, I2 = 0, without). Energies stay relative to the hyperfine-free
+ * level centre, which is the zero-field line centre of the J-resolved line.
+ * Labels as sublevelLabel. Exact: copies only.
  *
  * Worked example: 87Rb 5²S1/2 at 0.01 T gives eight states labelled
  * "F=2, mF=2" … "F=1, mF=−1", each with its mJ, mI amplitudes.
  */
-export function statesFromHyperfine(J2: number, states: FieldState[]): LineState[] {
+export function statesFromHyperfine(J2: number, states: FieldState[], I2 = 1): LineState[] {
   return states.map((s) => ({
-    label: `F=${half(s.F2)}, mF=${half(s.mF2)}`,
+    label: sublevelLabel(I2, s.F2, s.mF2),
     M2: s.mF2,
     energy: s.energy,
     amplitudes: s.basis.map((b, i) => ({ J2, mJ2: b.mJ2, mI2: b.mI2, amplitude: s.vector[i]! })),
+  }));
+}
+
+/**
+ * Line states of one level from the term solver (termHyperfineZeeman.ts):
+ * each state with its amplitudes on every listed J of the term, its energy
+ * from the level's own listed energy (so E_u − E_l is the shift from the
+ * line's zero-field, hyperfine-free centre), labelled as sublevelLabel (the
+ * level's own F, mF, or mJ without nuclear spin). Exact: copies only.
+ *
+ * Worked example: 6Li 2P3/2 (I = 1) at 832 G gives twelve states
+ * "F=1/2, mF=−1/2" … "F=5/2, mF=5/2", each but the two stretched ones with
+ * amplitudes on J = 1/2 as well as on J = 3/2.
+ */
+export function statesFromTerm(I2: number, states: readonly TermFieldState[]): LineState[] {
+  return states.map((s) => ({
+    label: sublevelLabel(I2, s.F2, s.mF2),
+    M2: s.mF2,
+    energy: s.energy,
+    amplitudes: s.amplitudes,
   }));
 }
 

@@ -23,6 +23,7 @@ import { polarizationOf, type Polarization } from "../linePattern.js";
 import type { ReducedElement } from "./lineAtField.js";
 import type { FloatFieldState } from "./hyperfineZeemanFloat.js";
 import type { FineStructureFloatEigenstate } from "./fineStructureFloat.js";
+import type { TermFloatState } from "./termHyperfineZeemanFloat.js";
 
 /** One amplitude of a float64 state on the uncoupled basis |J mJ mI⟩ (doubled quantum numbers). */
 export interface FloatBasisAmplitude {
@@ -57,19 +58,37 @@ function half(x2: number): string {
   return x2 % 2 === 0 ? String(x2 / 2) : `${x2}/2`;
 }
 
+/** The twin of sublevelLabel (lineAtField.ts): "F=2, mF=1" with nuclear spin, "mJ=1/2" without. */
+function label(I2: number, F2: number, mF2: number): string {
+  return I2 > 0 ? `F=${half(F2)}, mF=${half(mF2)}` : `mJ=${half(mF2)}`;
+}
+
 /**
  * Line states from float64 hyperfine–Zeeman states (solveHyperfineZeemanFloat),
- * labelled as statesFromHyperfine labels the Dec ones. Exact: copies only.
+ * labelled as statesFromHyperfine labels the Dec ones (I2 = 0: "mJ=…").
+ * Exact: copies only.
  * Worked example: 87Rb 5²S1/2 at 0.01 T gives eight states "F=1, mF=-1" …
  * "F=2, mF=2" with their mJ, mI amplitudes.
  */
-export function statesFromHyperfineFloat(J2: number, states: readonly FloatFieldState[]): FloatLineState[] {
+export function statesFromHyperfineFloat(J2: number, states: readonly FloatFieldState[], I2 = 1): FloatLineState[] {
   return states.map((s) => ({
-    label: `F=${half(s.F2)}, mF=${half(s.mF2)}`,
+    label: label(I2, s.F2, s.mF2),
     M2: s.mF2,
     energy: s.energy,
     amplitudes: s.basis.map((b, i) => ({ J2, mJ2: b.mJ2, mI2: b.mI2, amplitude: s.vector[i]! })),
   }));
+}
+
+/**
+ * Line states of one level from the float64 term solver
+ * (termHyperfineZeemanFloat.ts), as statesFromTerm makes them from the Dec
+ * one: amplitudes on every listed J, energy from the level's own listed
+ * energy, labels "F=…, mF=…" (or "mJ=…" without nuclear spin). Exact: copies
+ * only. Worked example: 6Li 2P3/2 at 832 G gives twelve states, as the Dec
+ * version.
+ */
+export function statesFromTermFloat(I2: number, states: readonly TermFloatState[]): FloatLineState[] {
+  return states.map((s) => ({ label: label(I2, s.F2, s.mF2), M2: s.mF2, energy: s.energy, amplitudes: s.amplitudes }));
 }
 
 /**

@@ -229,8 +229,18 @@ function twoByTwo(a: Dec, b: Dec, d: Dec): SymmetricEigen {
  * Diagonalize a real symmetric Dec matrix (see the module comment).
  * `floatMatrix`, optional, is the same matrix in float64 when the caller
  * already has it (it only seeds the float stage; omitted, it is derived).
+ * `seedVectors`, optional, are float64 eigenvectors the caller already has,
+ * in ascending order of their eigenvalues, to start from instead of the
+ * float stage (e.g. better ones than a float64 solve of the whole matrix
+ * gives, when its diagonal spans many orders of magnitude: the term solver,
+ * termHyperfineZeeman.ts); like the float stage they only choose the
+ * starting basis.
  */
-export function symmetricEigen(matrix: readonly (readonly Dec[])[], floatMatrix?: readonly (readonly number[])[]): SymmetricEigen {
+export function symmetricEigen(
+  matrix: readonly (readonly Dec[])[],
+  floatMatrix?: readonly (readonly number[])[],
+  seedVectors?: readonly (readonly number[])[],
+): SymmetricEigen {
   const n = matrix.length;
   if (n === 1) return { values: [matrix[0]![0]!], vectors: [[ONE]] };
   if (n === 2) return twoByTwo(matrix[0]![0]!, matrix[0]![1]!, matrix[1]![1]!);
@@ -240,7 +250,7 @@ export function symmetricEigen(matrix: readonly (readonly Dec[])[], floatMatrix?
     a = matrix.map((row) => row.slice());
     v = a.map((_, i) => a.map((__, j) => (i === j ? ONE : ZERO)));
   } else {
-    const seed = symmetricEigenFloat(floatMatrix ?? matrix.map((row) => row.map((x) => x.toNumber()))).vectors;
+    const seed = seedVectors ?? symmetricEigenFloat(floatMatrix ?? matrix.map((row) => row.map((x) => x.toNumber()))).vectors;
     const cols = orthonormalColumns(seed);
     // a = Qᵀ·H·Q with Q's columns `cols`; H is banded here, so skip its zeros
     const nz = matrix.map((row) => [...row.keys()].filter((k) => !row[k]!.isZero()));

@@ -62,6 +62,7 @@ import { threeJ } from "../wigner.js";
 import { hyperfineShift } from "../hyperfine.js";
 import { prepareHyperfineZeeman, type PreparedBlock, type UncoupledState } from "./hyperfineZeeman.js";
 import { symmetricEigen } from "./symmetricEigen.js";
+import { symmetricEigenFloat } from "./symmetricEigenFloat.js";
 
 /** One listed level of the term. */
 export interface TermLevel {
@@ -131,6 +132,14 @@ export interface TermBlock {
   zeeman: Dec[][];
   floatFixed: number[][];
   floatZeeman: number[][];
+  /**
+   * The field-free part shifted by each listed level's offset, E_J − E_ref,
+   * rounded to float64 after the shift (for the levels with states in this
+   * block): the float64 eigenvectors of the states of level J are taken
+   * from the matrix shifted by its own offset, where its entries are small
+   * and float64 keeps their differences (termBlockFloatEigen).
+   */
+  floatFixedFrom: { level: number; matrix: number[][] }[];
   /** Level index, F and high-field label of the block's k-th lowest zero-field level. */
   ranks: { level: number; F2: number; high: UncoupledState }[];
 }
@@ -244,7 +253,15 @@ export function prepareTerm(p: TermProblem): PreparedTerm {
       .sort((x, y) => x.e.cmp(y.e) || p.levels[x.level]!.J2 - p.levels[y.level]!.J2 || x.F2 - y.F2)
       .map(({ level, F2, high }) => ({ level, F2, high }));
     if (ranks.length !== n) throw new Error("internal: block size does not match the number of (J, F) levels");
-    blocks.push({ M2, basis, fixed, zeeman, ranks, floatFixed: fixed.map((r) => r.map((x) => x.toNumber())), floatZeeman: zeeman.map((r) => r.map((x) => x.toNumber())) });
+    const floatFixedFrom = parts.map(({ i }) => {
+      const offset = p.levels[i]!.energy.minus(ref);
+      return { level: i, matrix: fixed.map((row, r) => row.map((x, c) => (r === c ? x.minus(offset) : x).toNumber())) };
+    });
+    blocks.push({
+      M2, basis, fixed, zeeman, ranks, floatFixedFrom,
+      floatFixed: fixed.map((r) => r.map((x) => x.toNumber())),
+      floatZeeman: zeeman.map((r) => r.map((x) => x.toNumber())),
+    });
   }
   return { problem: p, ref, blocks };
 }
@@ -255,43 +272,89 @@ export function prepareTerm(p: TermProblem): PreparedTerm {
  * accuracy; worked example there.
  */
 export function termHyperfineZeemanSolver(problem: TermProblem | PreparedTerm): (tesla: Dec) => TermSolution {
-  const { problem: p, ref, blocks } = "blocks" in problem ? problem : prepareTerm(problem);
+  const prepared = "blocks" in problem ? problem : prepareTerm(problem);
+  const p = prepared.problem;
   return (tesla: Dec) => {
     if (tesla.isNegative()) throw new RangeError("field must be ≥ 0 T");
-    const scale = p.muB_h.mul(tesla);
     const out: TermFieldState[][] = p.levels.map(() => []);
-    for (const b of blocks) {
-      const n = b.basis.length;
-      const h = b.fixed.map((row, r) => row.map((x, c) => (b.zeeman[r]![c]!.isZero() ? x : x.plus(scale.mul(b.zeeman[r]![c]!)))));
-      const eig = symmetricEigen(h, n > 2 ? h.map((row) => row.map((x) => x.toNumber())) : undefined);
-      for (let k = 0; k < n; k++) {
-        const { level, F2, high } = b.ranks[k]!;
-        const J2 = p.levels[level]!.J2;
-        let v = eig.vectors[k]!;
-        // sign: the largest component on the state's own J positive
-        let lead = ZERO;
-        for (let i = 0; i < n; i++) if (b.basis[i]!.J2 === J2 && v[i]!.abs().gt(lead.abs())) lead = v[i]!;
-        if (lead.isNegative()) v = v.map((x) => x.neg());
-        let slope = ZERO;
-        for (let r = 0; r < n; r++) {
-          if (v[r]!.isZero()) continue;
-          for (let c = 0; c < n; c++) {
-            const z = b.zeeman[r]![c]!;
-            if (!z.isZero() && !v[c]!.isZero()) slope = slope.plus(v[r]!.mul(z).mul(v[c]!));
-          }
-        }
-        out[level]!.push({
-          J2,
-          F2,
-          mF2: b.M2,
-          energy: eig.values[k]!.plus(ref).minus(p.levels[level]!.energy),
-          amplitudes: b.basis.map((s, i) => ({ J2: s.J2, mJ2: s.mJ2, mI2: s.mI2, amplitude: v[i]! })),
-          highField: high,
-          slope: slope.mul(p.muB_h),
-        });
-      }
-    }
+    for (const b of prepared.blocks) for (const st of solveTermBlock(prepared, b, tesla)) out[st.level]!.push(st.state);
     for (const states of out) states.sort((x, y) => x.F2 - y.F2 || x.mF2 - y.mF2);
     return out;
   };
+}
+
+/**
+ * The states of one M block of a prepared term at field `tesla` (≥ 0), in
+ * ascending energy (the block's rank order), each with the index of its
+ * level in TermProblem.levels. The whole-term solver is this, block by
+ * block; a caller that needs two sublevels only (a field-insensitive point
+ * of a transition, termSublevelTransitions.ts) solves their blocks alone.
+ * Same model, labels and accuracy as termHyperfineZeemanSolver; worked
+ * example there (the 6Li 2P3/2 stretched state is the one state of block
+ * M = 5/2).
+ */
+export function solveTermBlock(prepared: PreparedTerm, b: TermBlock, tesla: Dec): { level: number; state: TermFieldState }[] {
+  const { problem: p, ref } = prepared;
+  const scale = p.muB_h.mul(tesla);
+  const n = b.basis.length;
+  const h = b.fixed.map((row, r) => row.map((x, c) => (b.zeeman[r]![c]!.isZero() ? x : x.plus(scale.mul(b.zeeman[r]![c]!)))));
+  const eig = symmetricEigen(h, undefined, n > 2 ? termBlockFloatEigen(b, scale.toNumber()).vectors : undefined);
+  const out: { level: number; state: TermFieldState }[] = [];
+  for (let k = 0; k < n; k++) {
+    const { level, F2, high } = b.ranks[k]!;
+    const J2 = p.levels[level]!.J2;
+    let v = eig.vectors[k]!;
+    // sign: the largest component on the state's own J positive
+    let lead = ZERO;
+    for (let i = 0; i < n; i++) if (b.basis[i]!.J2 === J2 && v[i]!.abs().gt(lead.abs())) lead = v[i]!;
+    if (lead.isNegative()) v = v.map((x) => x.neg());
+    let slope = ZERO;
+    for (let r = 0; r < n; r++) {
+      if (v[r]!.isZero()) continue;
+      for (let c = 0; c < n; c++) {
+        const z = b.zeeman[r]![c]!;
+        if (!z.isZero() && !v[c]!.isZero()) slope = slope.plus(v[r]!.mul(z).mul(v[c]!));
+      }
+    }
+    out.push({
+      level,
+      state: {
+        J2,
+        F2,
+        mF2: b.M2,
+        energy: eig.values[k]!.plus(ref).minus(p.levels[level]!.energy),
+        amplitudes: b.basis.map((s, i) => ({ J2: s.J2, mJ2: s.mJ2, mI2: s.mI2, amplitude: v[i]! })),
+        highField: high,
+        slope: slope.mul(p.muB_h),
+      },
+    });
+  }
+  return out;
+}
+
+/**
+ * Float64 eigenpairs of one block at Zeeman scale `floatScale` = (μB/h)·B,
+ * in rank order: the vector and energy of each state come from the block
+ * matrix shifted by its own level's offset (TermBlock.floatFixedFrom), so
+ * its energy is measured from its own level's listed energy and keeps
+ * float64 resolution of that, not of the fine-structure interval (1e-3 Hz
+ * for a 17 THz interval in one float64 matrix, 1e-7 Hz this way); the
+ * shift changes no eigenvector. Seeds the Dec solver and is the float64
+ * twin's answer (termHyperfineZeemanFloat.ts). Exact: no; float64.
+ * Worked example: the 1×1 block M = 5/2 of 6Li 2P gives its one state at
+ * 3A/2 + B/4 + (μB/h)·B·(3gJ/2 + gI) from E(2P3/2).
+ */
+export function termBlockFloatEigen(b: TermBlock, floatScale: number): { values: number[]; vectors: number[][] } {
+  const n = b.basis.length;
+  const values: number[] = new Array(n);
+  const vectors: number[][] = new Array(n);
+  for (const { level, matrix } of b.floatFixedFrom) {
+    const eig = symmetricEigenFloat(matrix.map((row, r) => row.map((x, c) => x + floatScale * b.floatZeeman[r]![c]!)));
+    for (let k = 0; k < n; k++) {
+      if (b.ranks[k]!.level !== level) continue;
+      values[k] = eig.values[k]!;
+      vectors[k] = eig.vectors[k]!;
+    }
+  }
+  return { values, vectors };
 }

@@ -18,16 +18,21 @@ import { solveFineStructure, type FineStructureTerm } from "../../../src/physics
 import { fineStructureFloatEigen } from "../../../src/physics/field/fineStructureFloat.js";
 import {
   lineComponentsAtField,
+  lineReducedElement,
   lsReducedElement,
   singleReducedElement,
   statesFromFineStructure,
   statesFromHyperfine,
+  statesFromTerm,
 } from "../../../src/physics/field/lineAtField.js";
 import {
   lineComponentsFloat,
   statesFromFineStructureFloat,
   statesFromHyperfineFloat,
+  statesFromTermFloat,
 } from "../../../src/physics/field/lineAtFieldFloat.js";
+import { prepareTerm, termHyperfineZeemanSolver, type TermProblem } from "../../../src/physics/field/termHyperfineZeeman.js";
+import { termHyperfineZeemanFloatSolver } from "../../../src/physics/field/termHyperfineZeemanFloat.js";
 import { sublevelTransitionPairs, sublevelTransitions } from "../../../src/physics/field/sublevelTransitions.js";
 import { CS133_6S, RB87_5P32, RB87_5S, muB_h } from "./levels.js";
 
@@ -168,6 +173,35 @@ describe("line components in float64", () => {
       // strengths sum to 1 (normalization) and each q to 1/3 (a trace; common practice)
       expect(f.reduce((s, c) => s + c.strength, 0)).toBeCloseTo(1, 14);
       for (const q of [-1, 0, 1]) expect(f.filter((c) => c.q === q).reduce((s, c) => s + c.strength, 0)).toBeCloseTo(1 / 3, 14);
+    }
+  });
+});
+
+describe("line components from term states in float64 (statesFromTermFloat with lineComponentsFloat)", () => {
+  it("equal the Dec ones for 87Rb D2 with 5²P3/2 solved in its 5p term, pair by pair, with the labels of statesFromTerm", () => {
+    // D. A. Steck, "Rubidium 87 D Line Data" (from memory): 5²P1/2 A = 408.328 MHz; 5²P3/2 as RB87_5P32; D-line wave numbers
+    const term: TermProblem = {
+      S2: 1, L: 1, I2: 3, gL: dec("1"), gS: val(CODATA_2022.g_e).neg(), gI: RB87_5P32.gI, muB_h,
+      levels: [
+        { J2: 1, energy: toSI(dec("12578.951"), "cm-1"), gJ: dec("2").div(3), A: dec("408328000"), B: dec("0") },
+        { J2: 3, energy: toSI(dec("12816.549"), "cm-1"), gJ: RB87_5P32.gJ, A: RB87_5P32.A, B: RB87_5P32.B },
+      ],
+    };
+    const prepared = prepareTerm(term);
+    const reduced = lineReducedElement("LS", 1, 0, 1, 1, 3, 1);
+    for (const B of ["0", "0.00047", "0.37"]) {
+      const upD = statesFromTerm(3, termHyperfineZeemanSolver(prepared)(dec(B))[1]!);
+      const lowD = statesFromHyperfine(1, solveHyperfineZeeman(RB87_5S, dec(B)));
+      const upF = statesFromTermFloat(3, termHyperfineZeemanFloatSolver(prepared)(Number(B))[1]!);
+      const lowF = statesFromHyperfineFloat(1, solveHyperfineZeemanFloat(prepareHyperfineZeeman(RB87_5S), Number(B)));
+      expect(upF.map((s) => [s.label, s.M2])).toEqual(upD.map((s) => [s.label, s.M2]));
+      const d = lineComponentsAtField(upD, lowD, 1, reduced);
+      const f = lineComponentsFloat(1, reduced)(upF, lowF);
+      expect(f.map((c) => [c.upper, c.lower, c.q])).toEqual(d.map((c) => [c.upper, c.lower, c.q]));
+      f.forEach((c, i) => {
+        expect(Math.abs(c.strength - d[i]!.strength.toNumber()), `${B} T`).toBeLessThan(1e-14);
+        expect(Math.abs(c.shift - d[i]!.shift.toNumber())).toBeLessThan(1e-4);
+      });
     }
   });
 });

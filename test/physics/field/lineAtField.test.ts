@@ -7,12 +7,17 @@ import { fitSpinOrbit, solveFineStructure, type FineStructureTerm } from "../../
 import { solveHyperfineZeeman } from "../../../src/physics/field/hyperfineZeeman.js";
 import {
   lineComponentsAtField,
+  lineReducedElement,
   lsReducedElement,
+  ownPairReducedElement,
   statesFromFineStructure,
   statesFromHyperfine,
+  statesFromTerm,
+  sublevelLabel,
   type FieldLineComponent,
   type LineState,
 } from "../../../src/physics/field/lineAtField.js";
+import { termHyperfineZeemanSolver, type TermProblem } from "../../../src/physics/field/termHyperfineZeeman.js";
 
 const muB_h = val(CODATA_2022.muB_h);
 const gS = val(CODATA_2022.g_e).neg();
@@ -134,6 +139,69 @@ describe("statesFromHyperfine", () => {
       comps.filter((c) => lowF[c.lower]!.F2 === 4 && upF[c.upper]!.F2 === Fu2).reduce((s, c) => s.add(c.strength), new Dec(0));
     const fromF2 = share(6).add(share(4)).add(share(2));
     // Steck, table of relative hyperfine transition strength factors S_FF'
+    close(share(6).div(fromF2), dec("0.7"), "1e-6");
+    close(share(4).div(fromF2), dec("0.25"), "1e-6");
+    close(share(2).div(fromF2), dec("0.05"), "1e-6");
+  });
+});
+
+describe("lines from term states (statesFromTerm, sublevelLabel, lineReducedElement, ownPairReducedElement)", () => {
+  // 6Li 2P: I = 1, gI = −0.0004476540, 2P1/2 at 446.789634 THz (A = 17.386 MHz), 2P3/2 at 446.799677 THz
+  // (A = −1.155 MHz, B = −0.10 MHz): M. E. Gehm, "Properties of 6Li", from memory (as scripts/fixtures/term_zeeman.py)
+  const li6: TermProblem = {
+    S2: 1, L: 1, I2: 2, gL: dec("1"), gS, gI: dec("-0.0004476540"), muB_h,
+    levels: [
+      { J2: 1, energy: dec("446.789634e12"), gJ: dec("2").div(3), A: dec("17.386e6"), B: dec("0") },
+      { J2: 3, energy: dec("446.799677e12"), gJ: dec("4").div(3), A: dec("-1.155e6"), B: dec("-0.10e6") },
+    ],
+  };
+
+  it("labels sublevels F, mF with nuclear spin and mJ without", () => {
+    expect(sublevelLabel(2, 3, 1)).toBe("F=3/2, mF=1/2");
+    expect(sublevelLabel(0, 5, -3)).toBe("mJ=-3/2");
+    const noSpin = statesFromHyperfine(1, solveHyperfineZeeman({ J2: 1, I2: 0, gJ: dec("2"), gI: dec("0"), A: dec("0"), B: dec("0"), muB_h }, dec("1")), 0);
+    expect(noSpin.map((s) => s.label)).toEqual(["mJ=-1/2", "mJ=1/2"]);
+  });
+
+  it("repeats statesFromTerm's worked example: 6Li 2P3/2 at 832 G has twelve states, all but the stretched ones with amplitude on J = 1/2", () => {
+    const st = statesFromTerm(2, termHyperfineZeemanSolver(li6)(dec("0.0832"))[1]!);
+    expect(st).toHaveLength(12); // (2J + 1)(2I + 1) = 4 · 3
+    expect(st[0]!.label).toBe("F=1/2, mF=-1/2");
+    expect(st[11]!.label).toBe("F=5/2, mF=5/2");
+    for (const s of st) {
+      const onHalf = s.amplitudes.some((a) => a.J2 === 1 && !a.amplitude.isZero());
+      expect(onHalf, s.label).toBe(Math.abs(s.M2) !== 5);
+    }
+  });
+
+  it("takes the LS reduced elements between the J of the terms, or the line's own pair where LS gives none or does not apply", () => {
+    const own = ownPairReducedElement(3, 1);
+    expect([own(3, 1).toNumber(), own(1, 1).toNumber()]).toEqual([1, 0]);
+    const ls = lineReducedElement("LS", 1, 0, 1, 1, 3, 1);
+    // D2 : D1 = 2 : 1 (common practice)
+    close(ls(3, 1).pow(2).div(ls(1, 1).pow(2)), dec("2"), "1e-50");
+    expect(lineReducedElement("own J pair", 1, 0, 1, 1, 3, 1)(1, 1).isZero()).toBe(true);
+    // an E1 line listed between a D and an S term: LS (triangle 2, 1, 0) gives nothing, so the line's own pair
+    const dToS = lineReducedElement("LS", 2, 0, 1, 1, 5, 1);
+    expect([dToS(5, 1).toNumber(), dToS(3, 1).toNumber()]).toEqual([1, 0]);
+  });
+
+  it("gives Steck's 87Rb D2 F = 2 → F′ = 3, 2, 1 shares 7/10, 1/4, 1/20 at a vanishing field from the 5p term states", () => {
+    // D. A. Steck, "Rubidium 87 D Line Data": as in the test above; 5²P1/2 A = 408.328 MHz, energies the D-line wave numbers
+    const gI = dec("-0.0009951414");
+    const term: TermProblem = {
+      S2: 1, L: 1, I2: 3, gL: dec("1"), gS, gI, muB_h,
+      levels: [
+        { J2: 1, energy: toSI(dec("12578.951"), "cm-1"), gJ: dec("2").div(3), A: dec("408328000"), B: dec("0") },
+        { J2: 3, energy: toSI(dec("12816.549"), "cm-1"), gJ: dec("1.3362"), A: dec("84718500"), B: dec("12496500") },
+      ],
+    };
+    const B = dec("1e-9");
+    const up = termHyperfineZeemanSolver(term)(B)[1]!;
+    const lowF = solveHyperfineZeeman({ J2: 1, I2: 3, gJ: dec("2.00233113"), gI, A: dec("3417341305.452145"), B: dec("0"), muB_h }, B);
+    const comps = lineComponentsAtField(statesFromTerm(3, up), statesFromHyperfine(1, lowF), 1, lineReducedElement("LS", 1, 0, 1, 1, 3, 1));
+    const share = (Fu2: number) => comps.filter((c) => lowF[c.lower]!.F2 === 4 && up[c.upper]!.F2 === Fu2).reduce((s, c) => s.add(c.strength), new Dec(0));
+    const fromF2 = share(6).add(share(4)).add(share(2));
     close(share(6).div(fromF2), dec("0.7"), "1e-6");
     close(share(4).div(fromF2), dec("0.25"), "1e-6");
     close(share(2).div(fromF2), dec("0.05"), "1e-6");

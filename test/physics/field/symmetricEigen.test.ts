@@ -17,4 +17,16 @@ describe("symmetricEigen", () => {
     const r = symmetricEigen(m);
     expect(r.values.map((v) => v.toSignificantDigits(50).toString())).toEqual(["1", "1", "4"]);
   });
+
+  it("starts from the caller's seed vectors when given, with the same result", () => {
+    // a graded matrix: a 1e13 diagonal offset next to entries of order 1 (the shape of a fine-structure term);
+    // its eigenvalues are 1e13 ± 1 and 3 exactly: [[a, 1], [1, a]] has a ± 1 (common practice)
+    const big = dec("1e13");
+    const m = [[big, dec("1"), dec("0")], [dec("1"), big, dec("0")], [dec("0"), dec("0"), dec("3")]];
+    const s = Math.SQRT1_2;
+    const r = symmetricEigen(m, undefined, [[0, 0, 1], [s, -s, 0], [s, s, 0]]);
+    expect(r.values.map((v) => v.toString())).toEqual(["3", "9999999999999", "10000000000001"]);
+    expect(r.vectors[1]![0]!.mul(r.vectors[1]![1]!).isNegative()).toBe(true);
+  });
 });
+

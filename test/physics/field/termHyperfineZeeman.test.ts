@@ -2,8 +2,8 @@ import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { Dec, dec, ZERO } from "../../../src/physics/decimal.js";
 import { solveHyperfineZeeman, type HyperfineZeemanLevel } from "../../../src/physics/field/hyperfineZeeman.js";
-import { prepareTerm, spinZElement, termHyperfineZeemanSolver, type TermProblem } from "../../../src/physics/field/termHyperfineZeeman.js";
-import { termHyperfineZeemanFloatSolver } from "../../../src/physics/field/termHyperfineZeemanFloat.js";
+import { prepareTerm, solveTermBlock, spinZElement, termBlockFloatEigen, termHyperfineZeemanSolver, type TermProblem } from "../../../src/physics/field/termHyperfineZeeman.js";
+import { termBlockFloatSolver, termHyperfineZeemanFloatSolver } from "../../../src/physics/field/termHyperfineZeemanFloat.js";
 import { landeLS } from "../../../src/physics/lande.js";
 import { CS133_6S, K40_4S, muB_h, RB87_5P32, RB87_5S } from "./levels.js";
 
@@ -17,25 +17,25 @@ interface FixtureCase {
   gL: string;
   gS: string;
   gI_used: string;
-  levels: { J2: number; energy: string; A: string; B: string }[];
+  levels: { J2: number; energy: string; A: string; B: string; gJ?: string }[];
   blocks: { M2: number; fields: { tesla: string; energies: string[] }[] }[];
 }
 // scripts/fixtures/term_zeeman.py: whole-term Hamiltonian in |mL mS mI⟩ at 50 digits (mpmath), no 3j/6j/CG tables
 const FIXTURE = JSON.parse(readFileSync(new URL("../../fixtures/field/term-mpmath.json", import.meta.url), "utf8")) as { cases: FixtureCase[] };
 const hz = (t: string) => (t.endsWith(" cm-1") ? dec(t.slice(0, -5)).mul(CM) : dec(t));
 
-/** The fixture's term as the solver's problem, with the LS gJ within each J (what the fixture's gL·Lz + gS·Sz implies). */
+/** The fixture's term as the solver's problem, with the LS gJ within each J (what the fixture's gL·Lz + gS·Sz implies) or the fixture's given one. */
 function problemOf(c: FixtureCase): TermProblem {
   const gL = dec(c.gL);
   const gS = dec(c.gS);
   return {
     S2: c.S2, L: c.L, I2: c.I2, gL, gS, gI: dec(c.gI_used), muB_h,
-    levels: c.levels.map((l) => ({ J2: l.J2, energy: hz(l.energy), gJ: landeLS(c.S2, c.L, l.J2, gL, gS) ?? ZERO, A: dec(l.A), B: dec(l.B) })),
+    levels: c.levels.map((l) => ({ J2: l.J2, energy: hz(l.energy), gJ: l.gJ ? dec(l.gJ) : landeLS(c.S2, c.L, l.J2, gL, gS) ?? ZERO, A: dec(l.A), B: dec(l.B) })),
   };
 }
 
 describe("termHyperfineZeemanSolver", () => {
-  it("matches the 50-digit whole-term diagonalization: 6Li 2P at 0, 27 G, 300 G, 832 G and 0.1 T; 88Sr and 87Sr 5s5p ³P up to 1 T", () => {
+  it("matches the 50-digit whole-term diagonalization: 6Li 2P at 0, 27 G, 300 G, 832 G and 0.1 T; 88Sr and 87Sr 5s5p ³P up to 1 T; 40Ca⁺ 3d ²D with a measured gJ up to 1 T", () => {
     for (const c of FIXTURE.cases) {
       const p = problemOf(c);
       const solve = termHyperfineZeemanSolver(p);
@@ -138,4 +138,37 @@ describe("termHyperfineZeemanSolver", () => {
       }
     }
   });
+
+  it("solves one M block alone as the whole-term solver does (solveTermBlock; the 6Li M = 5/2 block is the stretched state)", () => {
+    const li = problemOf(FIXTURE.cases.find((c) => c.name === "6Li 2P")!);
+    const prepared = prepareTerm(li);
+    const B = dec("0.0832");
+    const whole = termHyperfineZeemanSolver(prepared)(B);
+    for (const b of prepared.blocks) {
+      for (const { level, state } of solveTermBlock(prepared, b, B)) {
+        const same = whole[level]!.find((x) => x.F2 === state.F2 && x.mF2 === state.mF2)!;
+        expect(state.energy.eq(same.energy)).toBe(true);
+      }
+    }
+    const top = prepared.blocks.find((b) => b.M2 === 5)!;
+    const [only] = solveTermBlock(prepared, top, B);
+    const p32 = li.levels[1]!;
+    // 3A/2 + B/4 + (μB/h)·B·(3gJ/2 + gI), hand arithmetic as above
+    const want = p32.A.mul(3).div(2).plus(p32.B.div(4)).plus(muB_h.mul(B).mul(p32.gJ.mul(3).div(2).plus(li.gI)));
+    expect(only!.state.energy.minus(want).abs().toNumber()).toBeLessThan(1e-30);
+    // the float64 eigenpairs of the same block, from its own level's energy (termBlockFloatEigen, termBlockFloatSolver)
+    expect(Math.abs(termBlockFloatEigen(top, muB_h.mul(B).toNumber()).values[0]! - want.toNumber())).toBeLessThan(1e-6);
+    expect(Math.abs(termBlockFloatSolver(prepared)(top, 0.0832)[0]!.state.energy - want.toNumber())).toBeLessThan(1e-6);
+  });
+
+  it("keeps float64 resolution of each level's own scale across a THz fine-structure interval (87Sr ³P at 1 T: 1e-6 Hz)", () => {
+    // the fixture's 87Sr ³P spans 581 cm⁻¹ (17 THz): one float64 matrix would resolve 2e-3 Hz only
+    const sr = FIXTURE.cases.find((c) => c.name === "87Sr 5s5p 3P")!;
+    const p = problemOf(sr);
+    const prepared = prepareTerm(p);
+    const exact = termHyperfineZeemanSolver(prepared)(dec("1"));
+    const float = termHyperfineZeemanFloatSolver(prepared)(1);
+    exact.forEach((lv, i) => lv.forEach((st, k) => expect(Math.abs(float[i]![k]!.energy - st.energy.toNumber()), `${i} ${k}`).toBeLessThan(1e-6 * Math.max(1, Math.abs(st.energy.toNumber()) * 1e-9))));
+  });
 });
+
