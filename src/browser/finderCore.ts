@@ -424,12 +424,14 @@ export function createFinder(data: SearchData, MiniSearchClass: typeof MiniSearc
     if (q.transitions.includes("magic")) list.sort(byLowest(magicPoints));
     else if (q.transitions.includes("insensitive")) list.sort(byLowest((t) => t.points));
     else list.sort((a, b) => Number(isClock(b)) - Number(isClock(a)));
-    const page = pageOf(l, ROWS.rf);
+    // One page, or several (one per lower F): then each transition says which.
+    const pages = l[11][ROWS.rf].split(" ").map((p) => p || speciesOf(l[0])[2]);
+    const which = l[14] ? unpackInts(l[14]) : null;
     for (const t of list) {
       const points = t.points.map((p) => p.text).join("; ");
       out.push({
         kind: "sublevel transition",
-        href: `${page}#${transitionAnchor(l[1], t.lower, t.upper)}`,
+        href: `${pages[which ? which[t.k]! : 0]}#${transitionAnchor(l[1], t.lower, t.upper)}`,
         label: `${levelBase(l)} · ${stateText(t.lower.F2, t.lower.mF2)} ↔ ${stateText(t.upper.F2, t.upper.mF2)} · ${transitionKindLabel(t.kind)}${isClock(t) ? " · clock" : ""}`,
         ...(points ? { answer: `field-insensitive at ${points}`, column: "insensitive" } : {}),
       });

@@ -83,10 +83,15 @@ export type SpeciesDoc = [string, string, string, string];
  *  gJ shown, gJ·μB/h (Hz/T) or "", gF shown per F, gF·μB/h per F (Hz/T) or "",
  *  pages of its rows [mJ, F, (F, mF), energies at the fields, transitions] ("" for the species overview),
  *  transitions as flat (F2, mF2, F2′, mF2′, kind) with kind 0 = M1, 1 = two-photon (packed, searchCodec.ts),
- *  field-insensitive points as [transition index, tesla, text]]
+ *  field-insensitive points as [transition index, tesla, text],
+ *  for transitions spread over several pages: each one's page as an index into RowPages[4] (packed), else ""]
  */
-export type LevelDoc = [number, string, string, string, string, number, number[], string, string, string[], string[], RowPages, string | number[], [number, string, string][]];
-/** Pages of a level's rows: [mJ, F, (F, mF), energies at the fields, transitions]; "" is the species overview. */
+export type LevelDoc = [number, string, string, string, string, number, number[], string, string, string[], string[], RowPages, string | number[], [number, string, string][], string | number[]];
+/**
+ * Pages of a level's rows: [mJ, F, (F, mF), energies at the fields, transitions]; "" is the species
+ * overview. The transitions may be on several pages (one per lower F when a level has very many):
+ * then the last holds them all, separated by spaces (ids and page names have none).
+ */
 export type RowPages = [string, string, string, string, string];
 /** [species index, id, upper level index, lower level index, vacuum λ in nm or "", multipole, id keys, flat (mu2, ml2) pairs (packed), page of the components from the site root, pattern or ""] */
 export type LineDoc = [number, string, number, number, string, string, string, string | number[], string, string];
@@ -176,6 +181,8 @@ export function searchData(s: SearchSpecies, fields: { text: string; tesla: stri
       for (const p of t.fieldInsensitive) points.push([k, exportText(p.tesla, 12), p.text]);
     });
     const levelPage = htmlFile(levelPagePath(s.id, id));
+    const onPage = transitions.map((t) => where(transitionAnchor(id, t.lower, t.upper), levelPage));
+    const transitionPages = [...new Set(onPage)];
     const h = l.hyperfine[0];
     const fieldF2 = h ? h.F2 : l.J2;
     const pages: RowPages = [
@@ -183,7 +190,7 @@ export function searchData(s: SearchSpecies, fields: { text: string; tesla: stri
       h ? where(hyperfineAnchor(id, h.F2), overview) : "",
       h ? where(mFAnchor(id, h.F2, mValues(h.F2)[0]!), overview) : "",
       where(fieldStateAnchor(id, fieldF2, mValues(fieldF2)[0]!), overview),
-      transitions[0] ? where(transitionAnchor(id, transitions[0].lower, transitions[0].upper), levelPage) : "",
+      transitionPages.join(" "),
     ];
     levels.push([
       0,
@@ -200,6 +207,7 @@ export function searchData(s: SearchSpecies, fields: { text: string; tesla: stri
       pages,
       packInts(flat),
       points,
+      transitionPages.length > 1 ? packInts(onPage.map((p) => transitionPages.indexOf(p))) : "",
     ]);
   }
   for (const ln of s.lines) {

@@ -59,12 +59,23 @@ describe("search data of a large synthetic atlas", () => {
     const [x0] = syntheticSearchAtlas();
     const levelPage = "species/x0/level/4s-S1_2/index.html";
     const moved = /^(field:|level:[^:]+:F=[^:]+:mF=)/;
-    const part = searchData({ ...x0!, pageOf: (rowId) => (moved.test(rowId) ? levelPage : "species/x0/index.html") }, SYNTHETIC_FIELDS);
+    // And a level whose transitions are on one page per lower F.
+    const byLowerF = (rowId: string) => /^rf:4s-S1\/2:F=(\d+)/.exec(rowId);
+    const pageOf = (rowId: string) =>
+      byLowerF(rowId) ? `${levelPage.replace("index.html", "")}transitions/F-${byLowerF(rowId)![1]}/index.html` : moved.test(rowId) ? levelPage : "species/x0/index.html";
+    const part = searchData({ ...x0!, pageOf }, SYNTHETIC_FIELDS);
     const client = clientContext([{ code: searchIndexScript(mergeSearchData([part])) }, ASSET("finder.js")]);
     const finder = client.AtlasFinder.createFinder(client.AtlasSearchData);
     expect(finder.search("4s-S1/2 F=2 mF=1", 1).rows[0]!.href).toBe(`${levelPage}#level:4s-S1/2:F=2:mF=1`);
     expect(finder.search("4s-S1/2 F=2", 1).rows[0]!.href).toBe("species/x0/index.html#level:4s-S1/2:F=2");
     expect(finder.search("4s-S1/2 F=2 mF=1 1 T", 1).rows[0]!.href).toBe(`${levelPage}#field:4s-S1/2:F=2:mF=1`);
+    const transitions = finder.search("x0 4s-S1/2 rf", 1000).rows;
+    expect(transitions.length).toBeGreaterThan(10);
+    for (const r of transitions) {
+      const F = /#rf:4s-S1\/2:F=(\d+)/.exec(r.href)![1];
+      expect(r.href, r.href).toMatch(new RegExp(`^species/x0/level/4s-S1_2/transitions/F-${F}/index\\.html#`));
+    }
+    expect(new Set(transitions.map((r) => r.href.split("#")[0])).size).toBeGreaterThan(1);
   });
 });
 
