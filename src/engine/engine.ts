@@ -5,18 +5,25 @@
  *
  * What it computes, and from which physics (the same as the build's exact
  * tables, src/results/computeFields.ts, but in double precision):
- *  - every sublevel energy of every level: the hyperfine–Zeeman Hamiltonian
- *    diagonalized per M block (hyperfineZeeman.ts, float twin
- *    solveHyperfineZeemanFloat), labels (F, mF) and high-field (mJ, mI) by
- *    the solver's rule;
+ *  - every sublevel energy of every level: for a level of a term whose
+ *    fine-structure partners are listed, the term Hamiltonian in |J mJ mI⟩
+ *    over the listed J (termHyperfineZeeman.ts, float twin
+ *    termHyperfineZeemanFloatSolver: hyperfine within each J, Zeeman
+ *    coupling between J from the LS structure, the level's gJ within its
+ *    own J; hyperfine matrix elements between different J not included);
+ *    for any other level the hyperfine–Zeeman Hamiltonian of its J
+ *    (hyperfineZeeman.ts, float twin solveHyperfineZeemanFloat); both
+ *    diagonalized per M block, labels (F, mF) and high-field (mJ, mI) by the
+ *    solvers' rule;
  *  - every sublevel transition frequency (upper minus lower energy) of the
  *    list the build made with sublevelTransitionPairs (in the engine data),
  *    for the levels with hyperfine structure;
  *  - each line's components (shift from the line centre, relative strength,
  *    polarization, state labels) from the model chooseLineModel picks for the
- *    line at this field (src/results/lineModel.ts, shared with the build):
- *    hyperfine–Zeeman eigenstates, fine-structure Paschen–Back eigenstates
- *    (fineStructureFloatEigen) or the J-resolved linear pattern; components
+ *    line (src/results/lineModel.ts, shared with the build): the eigenstates
+ *    of both levels, each from its own level's solver, with LS reduced
+ *    elements between the J of the terms or the line's own J pair
+ *    (lineReducedElement), or the J-resolved linear pattern; components
  *    are computed by lineComponentsFloat, those weaker than 1e-20 of the line
  *    left out, sorted by shift then by descending Δm, as the build does;
  *    with the line's frequency ν0 = c/λ (engine data), each component's
@@ -36,15 +43,16 @@
  * species with the exact build.
  */
 import { Dec } from "../physics/decimal.js";
-import { formatDoubled, mValues } from "../physics/quantum.js";
+import { formatDoubled } from "../physics/quantum.js";
 import { prepareHyperfineZeeman, type PreparedLevel } from "../physics/field/hyperfineZeeman.js";
 import { solveHyperfineZeemanFloat, type FloatFieldState } from "../physics/field/hyperfineZeemanFloat.js";
-import { fineStructureFloatEigen, type FineStructureFloatEigen, type FineStructureFloatEigenstate } from "../physics/field/fineStructureFloat.js";
-import { lsReducedElement, singleReducedElement } from "../physics/field/lineAtField.js";
+import { prepareTerm } from "../physics/field/termHyperfineZeeman.js";
+import { termHyperfineZeemanFloatSolver, type TermFloatState } from "../physics/field/termHyperfineZeemanFloat.js";
+import { lineReducedElement, singleReducedElement } from "../physics/field/lineAtField.js";
 import {
   lineComponentsFloat,
-  statesFromFineStructureFloat,
   statesFromHyperfineFloat,
+  statesFromTermFloat,
   type FloatLineComponents,
   type FloatLineState,
 } from "../physics/field/lineAtFieldFloat.js";
@@ -59,7 +67,6 @@ const num = (s: string | null): number | null => (s === null ? null : Number(s))
 interface PreparedLevelEntry {
   data: EngineLevel;
   prepared: PreparedLevel;
-  gJ: number;
   linearUpTo: number | null;
   paschenBack: number | null;
   transitions: EngineLevel["transitions"];
@@ -68,7 +75,8 @@ interface PreparedLevelEntry {
 }
 
 interface PreparedTerm {
-  eigen: FineStructureFloatEigen;
+  /** The float64 term solver (termHyperfineZeemanFloat.ts) over the listed levels, in the engine data's partner order. */
+  solve: (tesla: number) => TermFloatState[][];
   limit: number | null;
   paschenBack: number | null;
 }
@@ -77,10 +85,8 @@ interface PreparedLine {
   data: EngineLine;
   /** Line frequency c/λ, Hz (float64: 384 THz to 0.06 Hz), or null without a wavelength. */
   centre: number | null;
-  /** Components from hyperfine–Zeeman states (single reduced element). */
-  hyperfine: FloatLineComponents;
-  /** Components from fine-structure states (LS reduced elements, evaluated only when the model is chosen). */
-  fineStructure: FloatLineComponents;
+  /** Components from the levels' eigenstates, with the reduced elements the model asks for (prepared on first use). */
+  components: () => FloatLineComponents;
   linear: { upper: string; lower: string; q: number; polarization: AtComponent<number>["polarization"]; strength: number; shiftHzPerT: number }[];
 }
 
@@ -88,6 +94,8 @@ interface PreparedSpecies {
   muB_h: number;
   levels: Map<string, PreparedLevelEntry>;
   terms: Map<string, PreparedTerm>;
+  /** Each level of a listed term: its term key and index in the term solver's output. */
+  termIndex: Map<string, { key: string; index: number }>;
   lines: PreparedLine[];
 }
 
@@ -109,7 +117,6 @@ function prepare(data: EngineData): PreparedSpecies {
     levels.set(l.id, {
       data: l,
       prepared,
-      gJ: level.gJ.toNumber(),
       linearUpTo: num(l.linearUpToT),
       paschenBack: num(l.paschenBackT),
       transitions: l.transitions,
@@ -117,28 +124,38 @@ function prepare(data: EngineData): PreparedSpecies {
     });
   }
   const terms = new Map<string, PreparedTerm>();
+  const termIndex = new Map<string, { key: string; index: number }>();
   for (const t of data.terms) {
-    terms.set(t.key, {
-      eigen: fineStructureFloatEigen({
-        S2: t.S2,
-        L: t.L,
-        partners: t.partners.map((p) => ({ J2: p.J2, energy: new Dec(p.energy) })),
-        gL: new Dec(t.gL),
-        gS: new Dec(t.gS),
-        muB_h,
-      }),
-      limit: num(t.limitT),
-      paschenBack: num(t.paschenBackT),
-    });
+    // the term solver's problem from the levels' own solver inputs (computeFields' termProblem does the same from the results)
+    const partners = t.partners.map((p) => levels.get(p.level)!.data);
+    const first = partners[0]!;
+    const problem = {
+      S2: t.S2,
+      L: t.L,
+      I2: first.I2,
+      gL: new Dec(t.gL),
+      gS: new Dec(t.gS),
+      gI: new Dec(first.gI),
+      muB_h,
+      levels: t.partners.map((p, i) => ({ J2: p.J2, energy: new Dec(p.energy), gJ: new Dec(partners[i]!.gJ), A: new Dec(partners[i]!.A), B: new Dec(partners[i]!.B) })),
+    };
+    terms.set(t.key, { solve: termHyperfineZeemanFloatSolver(prepareTerm(problem)), limit: num(t.limitT), paschenBack: num(t.paschenBackT) });
+    t.partners.forEach((p, index) => termIndex.set(p.level, { key: t.key, index }));
   }
   const lines = data.lines.map((ln): PreparedLine => {
     const u = levels.get(ln.upper)!.data;
     const l = levels.get(ln.lower)!.data;
+    let components: FloatLineComponents | null = null;
     return {
       data: ln,
       centre: ln.frequencyHz === undefined || ln.frequencyHz === null ? null : Number(ln.frequencyHz),
-      hyperfine: lineComponentsFloat(ln.k, singleReducedElement),
-      fineStructure: lineComponentsFloat(ln.k, lsReducedElement(u.L, l.L, u.S2, ln.k)),
+      components: () => {
+        if (components) return components;
+        // the model does not change with the field: the reduced elements are the same at every field
+        const choice = chooseLineModel(sideAtZero(termIndex.has(u.id)), sideAtZero(termIndex.has(l.id)), facts(ln, u, l));
+        const reduced = choice.model === "hyperfine–Zeeman eigenstates" ? singleReducedElement : lineReducedElement(choice.reduced, u.L, l.L, u.S2, ln.k, u.J2, l.J2);
+        return (components = lineComponentsFloat(ln.k, reduced));
+      },
       linear: ln.linear.map((x) => ({
         upper: `mJ=${formatDoubled(x.mu2)}`,
         lower: `mJ=${formatDoubled(x.ml2)}`,
@@ -149,8 +166,12 @@ function prepare(data: EngineData): PreparedSpecies {
       })),
     };
   });
-  return { muB_h: muB_h.toNumber(), levels, terms, lines };
+  return { muB_h: muB_h.toNumber(), levels, terms, termIndex, lines };
 }
+
+/** A level's side for the model choice where only its term membership matters (the model is the same at every field). */
+const sideAtZero = (inTerm: boolean): LineSide => ({ hf: "zero field", fs: "zero field", inTerm });
+const facts = (ln: EngineLine, u: EngineLevel, l: EngineLevel) => ({ sameSpin: u.S2 === l.S2, multipole: ln.multipole, hyperfineBoth: ln.hyperfineBoth });
 
 function prepared(data: EngineData): PreparedSpecies {
   let p = preparedCache.get(data);
@@ -171,30 +192,43 @@ export function prepareEngine(data: EngineData): void {
 export function engineAt(data: EngineData, tesla: number): AtResult<number> {
   if (!(tesla >= 0) || !Number.isFinite(tesla)) throw new RangeError("field must be a finite number of tesla, 0 or more");
   const sp = prepared(data);
+  const termSolved = new Map<string, TermFloatState[][]>();
+  for (const [key, t] of sp.terms) termSolved.set(key, t.solve(tesla));
   const solved = new Map<string, FloatFieldState[]>();
-  for (const [id, lv] of sp.levels) solved.set(id, solveHyperfineZeemanFloat(lv.prepared, tesla));
+  const termStates = (id: string): TermFloatState[] | null => {
+    const at = sp.termIndex.get(id);
+    return at ? termSolved.get(at.key)![at.index]! : null;
+  };
+  for (const [id, lv] of sp.levels) if (!sp.termIndex.has(id)) solved.set(id, solveHyperfineZeemanFloat(lv.prepared, tesla));
+  /** A level's energies in the solvers' (F, mF) order. */
+  const energies = (id: string): number[] => termStates(id)?.map((s) => s.energy) ?? solved.get(id)!.map((s) => s.energy);
 
-  const levels = [...sp.levels.values()].map((lv) => ({
-    id: lv.data.id,
-    states: solved.get(lv.data.id)!.map(
-      (st): AtState<number> => ({
-        F: formatDoubled(st.F2),
-        mF: formatDoubled(st.mF2),
-        E_Hz: st.energy,
-        high_field: { mJ: formatDoubled(st.highField.mJ2), mI: formatDoubled(st.highField.mI2) },
-      }),
-    ),
-  }));
+  const levels = [...sp.levels.values()].map((lv) => {
+    const ts = termStates(lv.data.id);
+    const states = ts
+      ? ts.map((st) => ({ F2: st.F2, mF2: st.mF2, energy: st.energy, highField: st.highField }))
+      : solved.get(lv.data.id)!.map((st) => ({ F2: st.F2, mF2: st.mF2, energy: st.energy, highField: st.highField }));
+    return {
+      id: lv.data.id,
+      states: states.map(
+        (st): AtState<number> => ({
+          F: formatDoubled(st.F2),
+          mF: formatDoubled(st.mF2),
+          E_Hz: st.energy,
+          high_field: { mJ: formatDoubled(st.highField.mJ2), mI: formatDoubled(st.highField.mI2) },
+        }),
+      ),
+    };
+  });
 
   const transitions: AtTransition<number>[] = [];
   for (const lv of sp.levels.values()) {
-    const states = solved.get(lv.data.id)!;
+    const e = energies(lv.data.id);
     for (const t of lv.transitions) {
-      transitions.push({ level: lv.data.id, lower: lv.labels[t.lo]!, upper: lv.labels[t.up]!, kind: t.kind, Hz: states[t.up]!.energy - states[t.lo]!.energy });
+      transitions.push({ level: lv.data.id, lower: lv.labels[t.lo]!, upper: lv.labels[t.up]!, kind: t.kind, Hz: e[t.up]! - e[t.lo]! });
     }
   }
 
-  const termStates = new Map<string, FineStructureFloatEigenstate[]>();
   const side = (lv: PreparedLevelEntry): LineSide => {
     const term = lv.data.fineStructureTerm === null ? null : sp.terms.get(lv.data.fineStructureTerm)!;
     return {
@@ -203,34 +237,16 @@ export function engineAt(data: EngineData, tesla: number): AtResult<number> {
       inTerm: term !== null,
     };
   };
-  const fsStates = (lv: PreparedLevelEntry): FloatLineState[] => {
-    const key = lv.data.fineStructureTerm;
-    if (key === null) {
-      // a level outside any treated term: |J mJ⟩ at its linear energy
-      return mValues(lv.data.J2).map((m2) => ({
-        label: `J=${formatDoubled(lv.data.J2)}, mJ=${formatDoubled(m2)}`,
-        M2: m2,
-        energy: (lv.gJ * sp.muB_h * tesla * m2) / 2,
-        amplitudes: [{ J2: lv.data.J2, mJ2: m2, mI2: 0, amplitude: 1 }],
-      }));
-    }
-    const term = sp.terms.get(key)!;
-    let states = termStates.get(key);
-    if (!states) termStates.set(key, (states = term.eigen.solve(tesla)));
-    return statesFromFineStructureFloat(
-      states.filter((s) => s.J2 === lv.data.J2),
-      term.eigen.offsets.get(lv.data.J2)!,
-    );
+  /** A level's states for a line: the term solver's or the single-J solver's, labelled as the build labels them. */
+  const lineStates = (lv: PreparedLevelEntry): FloatLineState[] => {
+    const ts = termStates(lv.data.id);
+    return ts ? statesFromTermFloat(lv.data.I2, ts) : statesFromHyperfineFloat(lv.data.J2, solved.get(lv.data.id)!, lv.data.I2);
   };
 
   const lines = sp.lines.map((ln): AtLine<number> => {
     const u = sp.levels.get(ln.data.upper)!;
     const l = sp.levels.get(ln.data.lower)!;
-    const { regime, model } = chooseLineModel(side(u), side(l), {
-      sameSpin: u.data.S2 === l.data.S2,
-      multipole: ln.data.multipole,
-      hyperfineBoth: ln.data.hyperfineBoth,
-    });
+    const { regime, model } = chooseLineModel(side(u), side(l), facts(ln.data, u.data, l.data));
     if (model === "J-resolved linear pattern") {
       return {
         id: ln.data.id,
@@ -247,19 +263,10 @@ export function engineAt(data: EngineData, tesla: number): AtResult<number> {
         })),
       };
     }
-    let upper: FloatLineState[];
-    let lower: FloatLineState[];
-    let components: FloatLineComponents;
-    if (model === "hyperfine–Zeeman eigenstates") {
-      upper = statesFromHyperfineFloat(u.data.J2, solved.get(u.data.id)!);
-      lower = statesFromHyperfineFloat(l.data.J2, solved.get(l.data.id)!);
-      components = ln.hyperfine;
-    } else {
-      upper = fsStates(u);
-      lower = fsStates(l);
-      components = ln.fineStructure;
-    }
-    const list = components(upper, lower)
+    const upper = lineStates(u);
+    const lower = lineStates(l);
+    const list = ln
+      .components()(upper, lower)
       .filter((x) => x.strength > NEGLIGIBLE)
       .sort((a, b) => a.shift - b.shift || b.q - a.q)
       .map(

@@ -41,7 +41,11 @@ export interface EngineLevel {
   transitions: { lo: number; up: number; kind: "magnetic-dipole" | "two-photon" }[];
 }
 
-/** A treated fine-structure term: the fine-structure solver's inputs and the regime limits. */
+/**
+ * A term whose fine-structure partners are all listed: with each partner
+ * level's own entry (J, I, gJ, gI, A, B) these are the term solver's inputs
+ * (termHyperfineZeeman.ts; computeFields' termProblem), and the regime limits.
+ */
 export interface EngineTerm {
   key: string;
   S2: number;

@@ -1,17 +1,29 @@
 /**
  * Field-dependent results of one species at the configured bias fields.
  * Pure: no file system, no clock. Which physics each number comes from is
- * chosen here, per level and per line, and said in the result (`model`,
- * `regime`) so the pages can state it.
+ * chosen here, per level and per line, and said in the result (`solver`,
+ * `model`, `regime`) so the pages can state it.
+ *
+ * Levels: a level that belongs to a term whose fine-structure partners are
+ * all listed with energies (fineStructureTerms) is solved with its term
+ * (termHyperfineZeeman.ts: |J mJ mI⟩ over the listed J, hyperfine within
+ * each J, Zeeman coupling between J from the LS structure, the level's gJ
+ * within its own J) for its field table, transitions, plots and line
+ * states, at every field; any other level with the single-J solver
+ * (hyperfineZeeman.ts). Lines: components from the eigenstates of both
+ * levels, each from its own level's solver (src/results/lineModel.ts).
  */
 import { Dec, ZERO } from "../physics/decimal.js";
 import type { ConstantsEdition } from "../physics/constants/constant.js";
 import { val } from "../physics/constants/constant.js";
-import { prepareHyperfineZeeman, solverForPrepared, type HyperfineZeemanLevel } from "../physics/field/hyperfineZeeman.js";
+import { prepareHyperfineZeeman, solverForPrepared, type HyperfineZeemanLevel, type UncoupledState } from "../physics/field/hyperfineZeeman.js";
 import { hyperfineZeemanFloatSolver } from "../physics/field/hyperfineZeemanFloat.js";
 import { quadraticZeemanCoefficient } from "../physics/field/quadraticZeeman.js";
 import { linearValidity } from "../physics/field/validity.js";
 import { sublevelTransitions } from "../physics/field/sublevelTransitions.js";
+import { termSublevelTransitions } from "../physics/field/termSublevelTransitions.js";
+import { prepareTerm, termHyperfineZeemanSolver, type PreparedTerm, type TermFieldState, type TermProblem } from "../physics/field/termHyperfineZeeman.js";
+import { termHyperfineZeemanFloatSolver } from "../physics/field/termHyperfineZeemanFloat.js";
 import {
   fitSpinOrbit,
   fineStructureSolver,
@@ -20,21 +32,22 @@ import {
 } from "../physics/field/fineStructure.js";
 import {
   lineComponentsAtField,
-  lsReducedElement,
+  lineReducedElement,
   singleReducedElement,
-  statesFromFineStructure,
   statesFromHyperfine,
+  statesFromTerm,
   type LineState,
   type ReducedElement,
 } from "../physics/field/lineAtField.js";
 import { hyperfineLinePattern } from "../physics/hyperfineLines.js";
-import { formatDoubled, mValues } from "../physics/quantum.js";
+import { formatDoubled } from "../physics/quantum.js";
 import type { LevelResult, LineResult, SpeciesResult } from "./types.js";
 import { quadraticPartners } from "./quadraticScope.js";
-import { chooseLineModel, levelRegime, type LineSide } from "./lineModel.js";
+import { chooseLineModel, hadFineStructureLabels, levelRegime, type LineSide } from "./lineModel.js";
 import type {
   ConfiguredField,
   LevelFieldResult,
+  LevelSolver,
   LineAtFieldResult,
   LineComponentAtField,
   LineFieldResult,
@@ -98,14 +111,31 @@ function plotGrid(fields: ConfiguredField[]): { linear: Dec[]; log: Dec[] } | nu
 
 type PlotGrid = ReturnType<typeof plotGrid>;
 
-function levelFields(s: SpeciesResult, l: LevelResult, c: ConstantsEdition, fields: ConfiguredField[], plotFields: PlotGrid): LevelFieldResult {
+/** A level's term solved at the configured fields: the prepared problem, each level's index in it, the states per field. */
+interface TermSolve {
+  term: TermFieldResult;
+  prepared: PreparedTerm;
+  index: Map<string, number>;
+  atFields: TermFieldState[][][];
+}
+
+/** A level's states at one configured field as a line needs them, with each state's high-field (J, mJ) for the alias labels. */
+interface LevelLineStates {
+  states: LineState[];
+  high: { J2: number; mJ2: number }[];
+}
+
+interface LevelComputed {
+  result: LevelFieldResult;
+  /** Line states at configured field number `at` (made on first use). */
+  lineStates: (at: number) => LevelLineStates;
+}
+
+function levelFields(
+  s: SpeciesResult, l: LevelResult, c: ConstantsEdition, fields: ConfiguredField[], plotFields: PlotGrid, term: TermSolve | undefined,
+): LevelComputed {
   const level = solverLevel(s, l, c);
-  // one preparation shared by the exact solver and its float64 twin
-  const prepared = prepareHyperfineZeeman(level);
-  const solve = solverForPrepared(prepared);
-  const perField = fields.map((f) => solve(f.tesla));
   const hasHf = level.I2 > 0;
-  const first = perField[0] ?? solve(ZERO);
   const partners = quadraticPartners(s, l, c, (lv) => hyperfineConstants(s, lv));
   const searchTo = insensitiveSearchLimit(fields);
   const quadratic = (F2: number, mF2: number): Dec | null => {
@@ -114,35 +144,93 @@ function levelFields(s: SpeciesResult, l: LevelResult, c: ConstantsEdition, fiel
     const extra = partners.coefficient(F2, mF2);
     return own === null || extra === null ? null : own.plus(extra);
   };
-  const rows = first.map((st, i) => ({
+  const common = {
+    hyperfineListed: hasHf ? l.input.hyperfine !== null : null,
+    quadratic: { scope: partners.scope, included: partners.included, missingJ2: partners.missingJ2 },
+    // where the linear numbers of this J hold (single-J solver; information, not a switch)
+    validity: hasHf ? linearValidity(level) : null,
+    insensitiveSearchTesla: searchTo,
+  };
+  const row = (st: { F2: number; mF2: number; highField: UncoupledState }, energies: Dec[]) => ({
     F2: st.F2,
     mF2: st.mF2,
     highField: st.highField,
-    energies: perField.map((states) => states[i]!.energy),
+    energies,
     quadraticPerTesla2: quadratic(st.F2, st.mF2),
-  }));
+  });
+  const memoAt = (make: (at: number) => LevelLineStates) => {
+    const cache = new Map<number, LevelLineStates>();
+    return (at: number) => {
+      let v = cache.get(at);
+      if (!v) cache.set(at, (v = make(at)));
+      return v;
+    };
+  };
+
+  if (term) {
+    const index = term.index.get(l.input.id)!;
+    const perField = term.atFields.map((sol) => sol[index]!);
+    const first = perField[0] ?? termHyperfineZeemanSolver(term.prepared)(ZERO)[index]!;
+    const grid = hasHf ? plotFields : null;
+    const floatSolve = grid ? termHyperfineZeemanFloatSolver(term.prepared) : null;
+    const sample = (bs: Dec[]) => {
+      const solved = bs.map((b) => floatSolve!(b.toNumber())[index]!);
+      return { fields: bs, energies: first.map((_, i) => solved.map((states) => states[i]!.energy)) };
+    };
+    const others = term.term.levelIds.filter((id) => id !== l.input.id);
+    const solver: LevelSolver = {
+      kind: "term",
+      term: term.term.key,
+      partners: others,
+      J2s: term.prepared.problem.levels.map((x) => x.J2).sort((a, b) => a - b),
+    };
+    return {
+      result: {
+        ...common,
+        solver,
+        rows: first.map((st, i) => row(st, perField.map((states) => states[i]!.energy))),
+        transitions: hasHf
+          ? termSublevelTransitions(term.prepared, index, level, fields.map((f) => f.tesla), perField, { quadraticExtra: partners.coefficient, toTesla: searchTo })
+          : [],
+        plot: grid ? { linear: sample(grid.linear), log: sample(grid.log) } : null,
+      },
+      lineStates: memoAt((at) => ({
+        states: statesFromTerm(level.I2, perField[at]!),
+        high: perField[at]!.map((st) => ({ J2: l.J2, mJ2: st.highField.mJ2 })),
+      })),
+    };
+  }
+
+  // one preparation shared by the exact solver and its float64 twin
+  const prepared = prepareHyperfineZeeman(level);
+  const solve = solverForPrepared(prepared);
+  const perField = fields.map((f) => solve(f.tesla));
+  const first = perField[0] ?? solve(ZERO);
   const grid = hasHf ? plotFields : null;
   const solveFloat = hasHf ? hyperfineZeemanFloatSolver(prepared) : null;
   const sample = (bs: Dec[]) => {
     const solved = bs.map((b) => solveFloat!(b.toNumber()));
-    return { fields: bs, energies: rows.map((_, i) => solved.map((states) => states.energy[i]!)) };
+    return { fields: bs, energies: first.map((_, i) => solved.map((states) => states.energy[i]!)) };
   };
   return {
-    rows,
-    hyperfineListed: hasHf ? l.input.hyperfine !== null : null,
-    quadratic: { scope: partners.scope, included: partners.included, missingJ2: partners.missingJ2 },
-    statesAtFields: perField,
-    validity: hasHf ? linearValidity(level) : null,
-    transitions: hasHf
-      ? sublevelTransitions(level, fields.map((f) => f.tesla), { statesAtFields: perField, quadraticExtra: partners.coefficient, toTesla: searchTo })
-      : [],
-    insensitiveSearchTesla: searchTo,
-    plot: grid ? { linear: sample(grid.linear), log: sample(grid.log) } : null,
+    result: {
+      ...common,
+      solver: { kind: "single-J" },
+      rows: first.map((st, i) => row(st, perField.map((states) => states[i]!.energy))),
+      transitions: hasHf
+        ? sublevelTransitions(level, fields.map((f) => f.tesla), { statesAtFields: perField, quadraticExtra: partners.coefficient, toTesla: searchTo })
+        : [],
+      plot: grid ? { linear: sample(grid.linear), log: sample(grid.log) } : null,
+    },
+    lineStates: memoAt((at) => ({
+      states: statesFromHyperfine(l.J2, perField[at]!, level.I2),
+      high: perField[at]!.map((st) => ({ J2: l.J2, mJ2: st.highField.mJ2 })),
+    })),
   };
 }
 
 /** Group levels into LS terms whose every J is listed with an energy. */
-function fineStructureTerms(s: SpeciesResult, c: ConstantsEdition, fields: ConfiguredField[]): TermFieldResult[] {
+function fineStructureTerms(s: SpeciesResult, c: ConstantsEdition, fields: ConfiguredField[]): { term: TermFieldResult; levels: LevelResult[] }[] {
   const groups = new Map<string, LevelResult[]>();
   for (const l of s.levels) {
     if (!l.input.energy) continue;
@@ -150,7 +238,7 @@ function fineStructureTerms(s: SpeciesResult, c: ConstantsEdition, fields: Confi
     const key = `${l.input.config} ${t.multiplicity}${t.letter}${t.parity ? "°" : ""}`;
     groups.set(key, [...(groups.get(key) ?? []), l]);
   }
-  const out: TermFieldResult[] = [];
+  const out: { term: TermFieldResult; levels: LevelResult[] }[] = [];
   for (const [key, levels] of groups) {
     if (levels.length < 2) continue;
     const { S2, L } = levels[0]!.input.term;
@@ -172,55 +260,101 @@ function fineStructureTerms(s: SpeciesResult, c: ConstantsEdition, fields: Confi
     let interval = ZERO;
     for (let i = 1; i < energies.length; i++) interval = Dec.max(interval, energies[i]!.sub(energies[i - 1]!));
     out.push({
-      key,
-      config: levels[0]!.input.config,
-      levelIds: levels.map((l) => l.input.id),
-      S2,
-      L,
-      fit: fitSpinOrbit(term),
-      limit: linearPatternLimit(term),
-      atFields: fields.map((f) => solveAt(f.tesla)),
-      paschenBackTesla: interval.isZero() ? null : interval.div(val(c.muB_h)),
+      levels,
+      term: {
+        key,
+        config: levels[0]!.input.config,
+        levelIds: levels.map((l) => l.input.id),
+        S2,
+        L,
+        fit: fitSpinOrbit(term),
+        limit: linearPatternLimit(term),
+        atFields: fields.map((f) => solveAt(f.tesla)),
+        paschenBackTesla: interval.isZero() ? null : interval.div(val(c.muB_h)),
+      },
     });
   }
   return out;
 }
 
+/**
+ * The term solver's problem for the listed levels of one term: their
+ * energies, each level's gJ in use within its own J (measured or LS; 0 for
+ * J = 0) and its hyperfine constants (A = B = 0 where none are listed), the
+ * species' gL, gS, gI and nuclear spin. Exact: copies only. Worked example:
+ * 87Rb 5p ²P° gives levels J = 1/2 (A = 408.328 MHz, gJ LS) and J = 3/2
+ * (A = 84.7185 MHz, B = 12.4965 MHz, gJ = 1.3362 measured), I = 3/2.
+ */
+export function termProblem(s: SpeciesResult, levels: LevelResult[], c: ConstantsEdition): TermProblem {
+  const withHf = levels.map((l) => solverLevel(s, l, c));
+  const { S2, L } = levels[0]!.input.term;
+  return {
+    S2,
+    L,
+    I2: withHf[0]!.I2,
+    gL: s.gL,
+    gS: s.gS,
+    gI: s.gI ?? ZERO,
+    muB_h: val(c.muB_h),
+    levels: levels.map((l, i) => ({ J2: l.J2, energy: l.input.energy!.si, gJ: withHf[i]!.gJ, A: withHf[i]!.A, B: withHf[i]!.B })),
+  };
+}
+
 // levelRegime is kept exported here for callers of this module; the rule lives in lineModel.ts.
 export { levelRegime };
 
-/** States of a level without mixing: |J mJ⟩ with the linear energy, for the lower level of a fine-structure-mixed line. */
-function isolatedStates(l: LevelResult, tesla: Dec, muB_h: Dec): LineState[] {
-  return mValues(l.J2).map((m2) => ({
-    label: `J=${formatDoubled(l.J2)}, mJ=${formatDoubled(m2)}`,
-    M2: m2,
-    energy: (l.gJ ?? ZERO).mul(muB_h).mul(tesla).mul(m2).div(2),
-    amplitudes: [{ J2: l.J2, mJ2: m2, mI2: 0, amplitude: new Dec(1) }],
-  }));
-}
+const half = formatDoubled;
 
-function componentsOf(upper: LineState[], lower: LineState[], k: number, reduced: ReducedElement): LineComponentAtField[] {
-  return lineComponentsAtField(upper, lower, k, reduced)
+function componentsOf(
+  upper: LevelLineStates, lower: LevelLineStates, k: number, reduced: ReducedElement, aliases: { Ju2: number; Jl2: number } | null,
+): LineComponentAtField[] {
+  const list = lineComponentsAtField(upper.states, lower.states, k, reduced)
     .filter((x) => x.strength.gt(NEGLIGIBLE))
     .map((x) => ({
-      upperLabel: upper[x.upper]!.label,
-      lowerLabel: lower[x.lower]!.label,
-      q: x.q,
-      polarization: x.polarization,
-      strength: x.strength,
-      shiftHz: x.shift,
-    }))
-    .sort((a, b) => a.shiftHz.cmp(b.shiftHz) || b.q - a.q);
+      c: {
+        upperLabel: upper.states[x.upper]!.label,
+        lowerLabel: lower.states[x.lower]!.label,
+        q: x.q,
+        polarization: x.polarization,
+        strength: x.strength,
+        shiftHz: x.shift,
+      } as LineComponentAtField,
+      hu: upper.high[x.upper]!.mJ2,
+      hl: lower.high[x.lower]!.mJ2,
+    }));
+  if (aliases) {
+    // the strongest component of each high-field pair (mJ, mJ′) carries the fine-structure labels of earlier builds
+    const best = new Map<string, (typeof list)[number]>();
+    for (const x of list) {
+      if (Math.abs(x.hu - x.hl) > 2 * k) continue;
+      const key = `${x.hu},${x.hl}`;
+      const b = best.get(key);
+      if (!b || x.c.strength.gt(b.c.strength)) best.set(key, x);
+    }
+    for (const x of best.values()) {
+      x.c.aliasLabels = { upper: `J=${half(aliases.Ju2)}, mJ=${half(x.hu)}`, lower: `J=${half(aliases.Jl2)}, mJ=${half(x.hl)}` };
+    }
+  }
+  return list.map((x) => x.c).sort((a, b) => a.shiftHz.cmp(b.shiftHz) || b.q - a.q);
 }
 
 export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: ConfiguredField[]): SpeciesFieldResult {
-  const muB_h = val(c.muB_h);
   // the plot fields depend on the configured fields only: one grid for every level
   const grid = plotGrid(fields);
-  const levels = new Map(s.levels.map((l) => [l.input.id, levelFields(s, l, c, fields, grid)]));
-  const terms = fineStructureTerms(s, c, fields);
+  const grouped = fineStructureTerms(s, c, fields);
+  const terms = grouped.map((g) => g.term);
   const termOf = new Map<string, TermFieldResult>();
   for (const t of terms) for (const id of t.levelIds) termOf.set(id, t);
+  // each listed term solved once per configured field, shared by its levels
+  const solves = new Map<string, TermSolve>();
+  for (const g of grouped) {
+    const prepared = prepareTerm(termProblem(s, g.levels, c));
+    const solve = termHyperfineZeemanSolver(prepared);
+    const ts: TermSolve = { term: g.term, prepared, index: new Map(g.levels.map((l, i) => [l.input.id, i])), atFields: fields.map((f) => solve(f.tesla)) };
+    for (const l of g.levels) solves.set(l.input.id, ts);
+  }
+  const computed = new Map(s.levels.map((l) => [l.input.id, levelFields(s, l, c, fields, grid, solves.get(l.input.id))]));
+  const levels = new Map([...computed].map(([id, x]) => [id, x.result]));
 
   const regimeOf = (l: LevelResult, tesla: Dec): LineSide => {
     const v = levels.get(l.input.id)!.validity;
@@ -232,74 +366,44 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
     };
   };
 
-  // Line states of a level at a field index, and reduced elements per (Lu, Ll, S, k): shared by all lines.
-  const memo = <T>(cache: Map<string, T>, key: string, make: () => T): T => {
-    let v = cache.get(key);
-    if (v === undefined) cache.set(key, (v = make()));
-    return v;
-  };
-  const fsStates = new Map<string, LineState[]>();
-  const hfStates = new Map<string, LineState[]>();
-  const reducedElements = new Map<string, ReducedElement>();
-  const reducedOf = (Lu: number, Ll: number, S2: number, k: number): ReducedElement =>
-    memo(reducedElements, `${Lu},${Ll},${S2},${k}`, () => {
-      const raw = lsReducedElement(Lu, Ll, S2, k);
-      const values = new Map<string, Dec>();
-      return (Ju2, Jl2) => memo(values, `${Ju2},${Jl2}`, () => raw(Ju2, Jl2));
-    });
-
   const lineResult = (ln: LineResult): LineFieldResult => {
     const u = ln.upper;
     const l = ln.lower;
     const hfu = hyperfineConstants(s, u);
     const hfl = hyperfineConstants(s, l);
     const hfBoth = hfu !== null && hfl !== null;
+    const facts = { sameSpin: u.input.term.S2 === l.input.term.S2, multipole: ln.input.multipole, hyperfineBoth: hfBoth };
+    let reduced: ReducedElement | null = null;
     const atFields = fields.map((f, at): LineAtFieldResult => {
       // the one rule shared with the field calculator (src/engine/)
-      const { regime, model } = chooseLineModel(regimeOf(u, f.tesla), regimeOf(l, f.tesla), {
-        sameSpin: u.input.term.S2 === l.input.term.S2,
-        multipole: ln.input.multipole,
-        hyperfineBoth: hfBoth,
-      });
-      const tu = termOf.get(u.input.id);
-      const tl = termOf.get(l.input.id);
-      if (model === "fine-structure Paschen–Back eigenstates") {
-        const statesOf = (lv: LevelResult, t: TermFieldResult | undefined) =>
-          memo(fsStates, `${lv.input.id}\u0000${at}`, () => {
-            if (!t) return isolatedStates(lv, f.tesla, muB_h);
-            const all = t.atFields[at]!.filter((st) => st.J2 === lv.J2);
-            return statesFromFineStructure(all, lv.input.energy!.si);
-          });
-        const reduced = reducedOf(u.input.term.L, l.input.term.L, u.input.term.S2, ln.k);
+      const su = regimeOf(u, f.tesla);
+      const sl = regimeOf(l, f.tesla);
+      const choice = chooseLineModel(su, sl, facts);
+      const { regime, model } = choice;
+      if (model === "J-resolved linear pattern") {
         return {
           field: f,
           regime,
           model,
-          components: componentsOf(statesOf(u, tu), statesOf(l, tl), ln.k, reduced),
+          components: ln.components.map((x) => ({
+            upperLabel: `mJ=${formatDoubled(x.mu2)}`,
+            lowerLabel: `mJ=${formatDoubled(x.ml2)}`,
+            q: x.deltaM,
+            polarization: x.polarization,
+            strength: x.strength.toDecimal(),
+            shiftHz: x.shiftHzPerT.mul(f.tesla),
+          })),
         };
       }
-      if (model === "hyperfine–Zeeman eigenstates") {
-        const statesOf = (lv: LevelResult) =>
-          memo(hfStates, `${lv.input.id}\u0000${at}`, () => statesFromHyperfine(lv.J2, levels.get(lv.input.id)!.statesAtFields[at]!));
-        return {
-          field: f,
-          regime,
-          model,
-          components: componentsOf(statesOf(u), statesOf(l), ln.k, singleReducedElement),
-        };
-      }
+      if (model === "hyperfine–Zeeman eigenstates") reduced = singleReducedElement;
+      else reduced ??= lineReducedElement(choice.reduced, u.input.term.L, l.input.term.L, u.input.term.S2, ln.k, u.J2, l.J2);
+      const aliases = hadFineStructureLabels(su, sl, facts) ? { Ju2: u.J2, Jl2: l.J2 } : null;
       return {
         field: f,
         regime,
         model,
-        components: ln.components.map((x) => ({
-          upperLabel: `mJ=${formatDoubled(x.mu2)}`,
-          lowerLabel: `mJ=${formatDoubled(x.ml2)}`,
-          q: x.deltaM,
-          polarization: x.polarization,
-          strength: x.strength.toDecimal(),
-          shiftHz: x.shiftHzPerT.mul(f.tesla),
-        })),
+        ...(model === "hyperfine–Zeeman eigenstates" ? {} : { reduced: choice.reduced }),
+        components: componentsOf(computed.get(u.input.id)!.lineStates(at), computed.get(l.input.id)!.lineStates(at), ln.k, reduced, aliases),
       };
     });
     const hyperfine = hfBoth
@@ -309,7 +413,7 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
           upper: { J2: u.J2, gJ: u.gJ ?? ZERO, ...hfu! },
           lower: { J2: l.J2, gJ: l.gJ ?? ZERO, ...hfl! },
           k: ln.k,
-          muB_h,
+          muB_h: val(c.muB_h),
         })
       : null;
     return { atFields, hyperfine };

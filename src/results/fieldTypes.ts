@@ -8,8 +8,8 @@ import type { LinearValidity } from "../physics/field/validity.js";
 import type { SublevelTransition } from "../physics/field/sublevelTransitions.js";
 import type { FineStructureState, LinearLimit, SpinOrbitFit } from "../physics/field/fineStructure.js";
 import type { HyperfineLineGroup } from "../physics/hyperfineLines.js";
+import type { ReducedElementKind } from "../physics/field/lineAtField.js";
 import type { Polarization } from "../physics/linePattern.js";
-import type { FieldState } from "../physics/field/hyperfineZeeman.js";
 import type { QuadraticScope } from "./quadraticScope.js";
 
 export interface ConfiguredField {
@@ -33,15 +33,34 @@ export interface FieldRow {
   quadraticPerTesla2: Dec | null;
 }
 
+/**
+ * Which solver gave a level's field table, transitions, plots and line
+ * states: the level alone (hyperfineZeeman.ts, |mJ mI⟩ of its J), or its
+ * term with the listed fine-structure partners (termHyperfineZeeman.ts,
+ * |J mJ mI⟩ over the listed J; hyperfine matrix elements between different
+ * J not included).
+ */
+export type LevelSolver =
+  | { kind: "single-J" }
+  | {
+      kind: "term";
+      /** Term key, e.g. "5p 2P°". */
+      term: string;
+      /** The other listed levels of the term, by id. */
+      partners: string[];
+      /** Doubled J of every listed level of the term (the basis), ascending. */
+      J2s: number[];
+    };
+
 export interface LevelFieldResult {
+  /** The solver behind rows, transitions, plot and the level's line states. */
+  solver: LevelSolver;
   rows: FieldRow[];
   /** Species with nuclear spin: whether the level lists hyperfine constants (false: A = B = 0 used); null without nuclear spin. */
   hyperfineListed: boolean | null;
   /** What the second-order coefficients of `rows` include (src/results/quadraticScope.ts). */
   quadratic: { scope: QuadraticScope; included: string[]; missingJ2: number[] };
-  /** The solver's states at each configured field (reused by the line calculations). */
-  statesAtFields: FieldState[][];
-  /** Null for a level without hyperfine structure. */
+  /** Where the linear numbers of this J hold (single-J solver, information); null for a level without hyperfine structure. */
   validity: LinearValidity | null;
   transitions: SublevelTransition[];
   /** Upper end of the field-insensitive search of `transitions`, T: max(1 T, twice the largest configured field). */
@@ -78,13 +97,27 @@ export interface LineComponentAtField {
   strength: Dec;
   /** Frequency offset from the zero-field line centre (hyperfine-free), Hz. */
   shiftHz: Dec;
+  /**
+   * The fine-structure state labels ("J=3/2, mJ=1/2") under which builds
+   * before the term solver listed this component (the strongest one of its
+   * high-field pair mJ → mJ′), so that links to those rows still land; absent
+   * elsewhere. Pages only: not exported.
+   */
+  aliasLabels?: { upper: string; lower: string };
 }
 
 export interface LineAtFieldResult {
   field: ConfiguredField;
   regime: Regime;
-  /** Which states the components come from. */
-  model: "hyperfine–Zeeman eigenstates" | "fine-structure Paschen–Back eigenstates" | "J-resolved linear pattern";
+  /**
+   * Which states the components come from (src/results/lineModel.ts): the
+   * term solver's for a level whose fine-structure partners are listed
+   * ("term …"), the single-J hyperfine–Zeeman solver's otherwise, or the
+   * J-resolved linear pattern (no nuclear spin, no partners).
+   */
+  model: "term hyperfine–Zeeman eigenstates" | "term Zeeman eigenstates" | "hyperfine–Zeeman eigenstates" | "J-resolved linear pattern";
+  /** With the term models: the reduced elements between the J of the terms (lineModel.ts); absent otherwise (one J pair). */
+  reduced?: ReducedElementKind;
   components: LineComponentAtField[];
 }
 

@@ -12,14 +12,25 @@
  *    terms; no limit means linear at every field); in "Paschen–Back" from
  *    PASCHEN_BACK_FACTOR times its Paschen–Back scale on; "intermediate" between.
  *  - a line is in the stronger regime of its two levels (hyperfine and fine
- *    structure both counted).
- *  - its components come from the fine-structure Paschen–Back eigenstates when
- *    the fine-structure regime of either level is beyond linear, one of them
- *    belongs to a treated fine-structure term, both have the same spin and the
- *    line is not M1; else from the hyperfine–Zeeman eigenstates when both
- *    levels have hyperfine structure; else from the J-resolved linear pattern.
+ *    structure both counted). The regime is information only: it never
+ *    chooses the physics.
+ *  - the model depends on the levels, not on the field: when either level
+ *    belongs to a term whose partners are listed (computeFields'
+ *    fineStructureTerms), the components come from the term solver's
+ *    eigenstates of that level (|J mJ mI⟩ over the listed J,
+ *    termHyperfineZeeman.ts) and the single-J solver's of the other, at
+ *    every field ("term hyperfine–Zeeman eigenstates" with nuclear spin,
+ *    "term Zeeman eigenstates" without); else from the hyperfine–Zeeman
+ *    eigenstates when both levels have hyperfine structure; else from the
+ *    J-resolved linear pattern (no nuclear spin, no partners: the exact
+ *    answer, linear in B).
+ *  - with the term states, the reduced elements between the J of the terms
+ *    are the LS ones (lsReducedElement) when both levels have the same spin
+ *    and the line is not M1; otherwise the line's own J pair only
+ *    (ownPairReducedElement).
  */
 import type { Dec } from "../physics/decimal.js";
+import type { ReducedElementKind } from "../physics/field/lineAtField.js";
 import type { LineAtFieldResult, Regime } from "./fieldTypes.js";
 
 /** A level counts as Paschen–Back from this multiple of its Paschen–Back scale on. */
@@ -76,23 +87,42 @@ export interface LineFacts {
 }
 
 /**
- * Regime of a line at a field and the model its components come from (see
- * the module comment). Exact: yes (comparisons only). Worked example (demo
- * data): 87Rb D2 at 1 G (both levels with hyperfine structure, fine structure
- * linear; 5²P3/2 already past its 1 % limit, far below its Paschen–Back
- * scale) → regime "intermediate", model "hyperfine–Zeeman eigenstates";
- * Ca⁺ 397 nm (no nuclear spin) at 1 T → "J-resolved linear pattern", and at
- * 10 T, past its 4p term's 1 % limit (about 7.1 T) but below 10× its
- * Paschen–Back scale → regime "intermediate", model "fine-structure
- * Paschen–Back eigenstates".
+ * Regime of a line at a field, the model its components come from and the
+ * reduced elements they use (see the module comment). Exact: yes
+ * (comparisons only). Worked example (demo data): 87Rb D2 at 1 G (5²P3/2
+ * listed with 5²P1/2; 5²P3/2 already past its 1 % limit, far below its
+ * Paschen–Back scale) → regime "intermediate", model "term hyperfine–Zeeman
+ * eigenstates", LS reduced elements; 40Ca⁺ 729 nm (no nuclear spin; 3d ²D5/2
+ * listed with ²D3/2) at 1 T → regime "linear Zeeman", model "term Zeeman
+ * eigenstates"; 40Ca⁺ 397 nm at 1 T (4p ²P1/2 listed with ²P3/2) → "linear
+ * Zeeman", "term Zeeman eigenstates", and at 10 T, past its 4p term's 1 %
+ * limit (about 7.1 T) but below 10× its Paschen–Back scale → "intermediate",
+ * the same model.
  */
-export function chooseLineModel(upper: LineSide, lower: LineSide, line: LineFacts): { regime: Regime; model: LineModel } {
-  const beyondLinear = (r: Regime) => r === "intermediate" || r === "Paschen–Back";
+export function chooseLineModel(upper: LineSide, lower: LineSide, line: LineFacts): { regime: Regime; model: LineModel; reduced: ReducedElementKind } {
   const regime = strongerRegime(strongerRegime(upper.hf, lower.hf), strongerRegime(upper.fs, lower.fs));
-  const fsMatters = beyondLinear(upper.fs) || beyondLinear(lower.fs);
-  if (fsMatters && (upper.inTerm || lower.inTerm) && line.sameSpin && line.multipole !== "M1") {
-    return { regime, model: "fine-structure Paschen–Back eigenstates" };
+  if (upper.inTerm || lower.inTerm) {
+    return {
+      regime,
+      model: line.hyperfineBoth ? "term hyperfine–Zeeman eigenstates" : "term Zeeman eigenstates",
+      reduced: line.sameSpin && line.multipole !== "M1" ? "LS" : "own J pair",
+    };
   }
-  if (line.hyperfineBoth) return { regime, model: "hyperfine–Zeeman eigenstates" };
-  return { regime, model: "J-resolved linear pattern" };
+  if (line.hyperfineBoth) return { regime, model: "hyperfine–Zeeman eigenstates", reduced: "own J pair" };
+  return { regime, model: "J-resolved linear pattern", reduced: "own J pair" };
+}
+
+/**
+ * Whether builds before the term solver labelled this line's components at
+ * this field by fine-structure states ("J=3/2, mJ=1/2"): the rule they used
+ * (fine-structure regime of either level beyond linear, one level in a
+ * listed term, the same spin, not M1). Kept only so that the pages can
+ * carry those labels as aliases of the rows that replace them, and links
+ * saved from such builds still land (src/site/anchors.ts). Exact: yes.
+ * Worked example: 23Na D2 at 1 T (3p term listed; its fine structure past
+ * its 1 % limit) → true; at 0.1 T → false.
+ */
+export function hadFineStructureLabels(upper: LineSide, lower: LineSide, line: LineFacts): boolean {
+  const beyondLinear = (r: Regime) => r === "intermediate" || r === "Paschen–Back";
+  return (beyondLinear(upper.fs) || beyondLinear(lower.fs)) && (upper.inTerm || lower.inTerm) && line.sameSpin && line.multipole !== "M1";
 }

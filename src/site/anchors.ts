@@ -46,6 +46,10 @@ export const lineDlambdaSectionAnchor = (lineId: string) => `line:${lineId}-wave
  * One component of a line at a field, named by its two states ("F=2, mF=1"
  * → "F=2,mF=1"). A pair of field eigenstates has one component at most
  * (q = M_u − M_l is fixed by the pair), so the two labels are a physics key.
+ * Builds before the term solver named some strong-field components by
+ * fine-structure states ("J=3/2,mJ=1/2-to-J=1/2,mJ=1/2"); that form stays as
+ * an alias of the strongest component of the same high-field pair
+ * (LineComponentAtField.aliasLabels, Row.aliases).
  */
 export const componentAtFieldAnchor = (lineId: string, tesla: string, upperLabel: string, lowerLabel: string) =>
   `${lineAtFieldAnchor(lineId, tesla)}:${upperLabel}-to-${lowerLabel}`.replace(/\s+/g, "");

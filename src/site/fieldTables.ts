@@ -91,16 +91,49 @@ export function quadraticFact(f: LevelFieldResult): string {
   return `Quadratic coefficients ${partners}${q.scope === "term-partial" ? `; ${missing} of the term not listed with an energy, so not included` : ""}.`;
 }
 
+const jList = (J2s: number[]) => J2s.map(formatDoubled).join(", ");
+const gJText = (l: LevelResult) =>
+  l.gJFrom === "measured" ? `its measured gJ = ${l.input.gJ!.text}` : l.gJFrom === "LS" ? "its LS gJ" : "no gJ (J = 0)";
+
+/**
+ * Which solver gave a level's energies, transitions, plots and line states,
+ * its basis, what it leaves out, and how the level's gJ enters (level pages
+ * and the overview's energies at the bias fields).
+ */
+export function solverFact(l: LevelResult, f: LevelFieldResult): string {
+  const lid = l.input.id;
+  const nuclear = f.hyperfineListed !== null;
+  const sv = f.solver;
+  if (sv.kind === "single-J") {
+    return nuclear
+      ? `Solved within its own J (no fine-structure partners listed with energies): hyperfine + Zeeman diagonalized in |mJ, mI⟩, block by block in M = mJ + mI, with ${gJText(l)}.`
+      : `Solved within its own J (no fine-structure partners listed with energies): its states |J, mJ⟩ shift linearly, (μB/h)·gJ·mJ·B, with ${gJText(l)}.`;
+  }
+  const others = sv.partners.join(", ");
+  const basis = nuclear ? "|J, mJ, mI⟩" : "|J, mJ⟩";
+  const m = nuclear ? "M = mJ + mI" : "mJ";
+  return [
+    `Solved together with its fine-structure partner${sv.partners.length > 1 ? "s" : ""} ${others} as one term (${sv.term}), at every field: the term Hamiltonian in ${basis} over J = ${jList(sv.J2s)}, block by block in ${m}, diagonalized exactly.`,
+    nuclear
+      ? "The listed level energies give the fine structure; each level's A and B its hyperfine structure within its own J; hyperfine matrix elements between different J are not included."
+      : "The listed level energies give the fine structure.",
+    `The field couples the J levels through the LS structure, (gS − gL)·Sz; within its own J this level's Zeeman term is gJ·Jz${nuclear ? " + gI·Iz" : ""} with ${gJText(l)}, the same value its lines use.`,
+  ].join(" ");
+}
+
 /** Sentences on where a level's linear numbers stop holding. */
 export function validityFacts(f: LevelFieldResult): string[] {
   const v = f.validity;
+  if (!v && f.solver.kind === "term") return ["No hyperfine structure: the shifts depart from linear only through the fine-structure partners (see the energies and the fine-structure section).", quadraticFact(f)];
   if (!v) return ["No hyperfine structure: in this model the shifts are exactly linear; see the fine-structure section where partners are listed.", quadraticFact(f)];
   const first = (s: { F2: number; mF2: number } | null) => (s ? ` (first to leave: F = ${formatDoubled(s.F2)}, mF = ${formatDoubled(s.mF2)})` : "");
+  // the limits are searched within this J alone: the regime is information, the tables use the term solver
+  const within = f.solver.kind === "term" ? " of this J alone (without its partners)" : "";
   return [
     ...(f.hyperfineListed === false ? ["No hyperfine constants are listed for this level: A = B = 0 is used, so its states are the nuclear sublevels mI of each mJ, shifting by (gJ·mJ + gI·mI)·μB·B/h."] : []),
     quadraticFact(f),
-    `Linear shifts within 1 % of the exact ones up to ${fieldText(v.relative.tesla)}${first(v.relative.sublevel)}.`,
-    `Linear shifts within 1 kHz of the exact ones up to ${fieldText(v.absolute.tesla)}${first(v.absolute.sublevel)}.`,
+    `Linear shifts within 1 % of the exact ones${within} up to ${fieldText(v.relative.tesla)}${first(v.relative.sublevel)}.`,
+    `Linear shifts within 1 kHz of the exact ones${within} up to ${fieldText(v.absolute.tesla)}${first(v.absolute.sublevel)}.`,
     ...(v.paschenBackTesla ? [`Hyperfine Paschen–Back scale (largest hyperfine interval over μB·|gJ|/h): ${fieldText(v.paschenBackTesla)}; well above it the states are |mJ, mI⟩.`] : []),
   ];
 }
@@ -177,7 +210,7 @@ export function termFacts(t: TermFieldResult): string[] {
       : "Spin–orbit constant: not defined for this term.",
     `The J-resolved linear pattern is off by more than 1 % from ${t.limit ? fieldText(t.limit.tesla) : "no field below the searched range"}${t.limit ? ` (first: J = ${formatDoubled(t.limit.J2)}, mJ = ${formatDoubled(t.limit.mJ2)})` : ""}.`,
     ...(t.paschenBackTesla ? [`Fine-structure Paschen–Back scale (largest interval over μB/h): ${fieldText(t.paschenBackTesla)}.`] : []),
-    "Hyperfine structure is left out of this treatment: it matters only where its splitting is comparable to the fine-structure mixing, far below these fields for the usual alkali and alkaline-earth terms.",
+    "This table leaves hyperfine structure out (spin–orbit + Zeeman in |mL mS⟩, with the LS g-factors): it shows the fine-structure mixing alone. The levels' energies, transitions and line components use the term solver, with hyperfine structure within each J and each level's gJ in use (see each level).",
   ];
 }
 
@@ -273,6 +306,8 @@ export function atFieldTable(ln: LineResult, a: LineAtFieldResult, home: TableHo
       csvPath: csvName(home, id, "at", a.field.text.replace(/\s+/g, "")),
       exportUrl: home.exportUrl,
       anchor: (c) => componentAtFieldAnchor(id, tesla, c.upperLabel, c.lowerLabel),
+      // builds before the term solver named the strongest component of each high-field pair by fine-structure states
+      aliases: (c) => (c.aliasLabels ? [componentAtFieldAnchor(id, tesla, c.aliasLabels.upper, c.aliasLabels.lower)] : []),
       columns: [
         { key: "upper", label: "upper state", kind: "text", cell: (c) => textCell(c.upperLabel.replace(/-/g, "−")) },
         { key: "lower", label: "lower state", kind: "text", cell: (c) => textCell(c.lowerLabel.replace(/-/g, "−")) },
@@ -288,6 +323,46 @@ export function atFieldTable(ln: LineResult, a: LineAtFieldResult, home: TableHo
     },
     a.components,
   );
+}
+
+/** The basis of a line's model at a field, for its heading. */
+export function modelBasis(a: LineAtFieldResult): string {
+  switch (a.model) {
+    case "term hyperfine–Zeeman eigenstates":
+      return "|J, mJ, mI⟩ over the listed J of a term; no hyperfine matrix elements between different J";
+    case "term Zeeman eigenstates":
+      return "|J, mJ⟩ over the listed J of a term";
+    case "hyperfine–Zeeman eigenstates":
+      return "|mJ, mI⟩ of each level's own J";
+    default:
+      return "|J, mJ⟩ of each level, linear shifts";
+  }
+}
+
+/**
+ * What a line's components at a field come from, in words: each level's
+ * solver and basis, the reduced elements, what is left out, how gJ enters.
+ * Empty for the J-resolved linear pattern (its own sentence says it).
+ */
+export function lineModelText(ln: LineResult, a: LineAtFieldResult, levelOf: (id: string) => LevelFieldResult): string {
+  if (a.model === "J-resolved linear pattern") return "";
+  const side = (l: LevelResult, which: string) => {
+    const sv = levelOf(l.input.id).solver;
+    return sv.kind === "term"
+      ? `${which} level ${l.input.id}: its term ${sv.term} solved whole (J = ${jList(sv.J2s)}, with ${sv.partners.join(", ")})`
+      : `${which} level ${l.input.id}: its own J alone`;
+  };
+  const parts = [`Components between the field eigenstates of both levels, each from its own level's solver, as in the level tables (${side(ln.upper, "upper")}; ${side(ln.lower, "lower")}).`];
+  if (a.model !== "hyperfine–Zeeman eigenstates") {
+    parts.push(
+      a.reduced === "LS"
+        ? "Transition amplitudes between the J of the terms from LS coupling (reduced elements by Edmonds eq. 7.1.7), so the amplitudes a mixed state has on its partner J count too."
+        : `Transition amplitudes from the line's own J pair only (${ln.input.multipole === "M1" ? "an M1 line" : "a change of spin"}: LS coupling gives no reduced elements between the other J); a mixed state's amplitudes on its partner J add none.`,
+    );
+    if (a.model === "term hyperfine–Zeeman eigenstates") parts.push("Hyperfine structure is kept within each J; hyperfine matrix elements between different J are not included.");
+  }
+  parts.push("Each level's gJ in use (measured where given) acts within its own J at both ends of the line; the coupling between J levels is the LS one. Shifts are from the zero-field, hyperfine-free line centre.");
+  return parts.join(" ");
 }
 
 /** The stick plot of a line at one bias field. */

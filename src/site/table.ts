@@ -55,6 +55,8 @@ export interface Cell {
 export interface Row {
   /** Stable anchor (see anchors.ts); also the row's HTML id. */
   anchor: string;
+  /** Further anchors that land on this row: forms of earlier builds that name the same row (anchors.ts), as empty elements in it. */
+  aliases?: string[];
   cells: Cell[];
 }
 

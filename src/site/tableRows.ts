@@ -48,7 +48,9 @@ export function tableRowsHtml(t: Table): string {
       const key = sortKey(c, col.kind);
       row += `<td class="k-${e(col.kind)}"${key === false ? "" : ` data-sort="${e(key)}"`}${c.hzPerT ? ` data-hz-per-t="${e(c.hzPerT)}"` : ""}${c.hz ? ` data-hz="${e(c.hz)}"` : ""}>${cellHtml(c, col)}</td>`;
     });
-    row += `<td class="k-link"><a class="row-link" href="#${anchor}" aria-label="Link to this row">#</a></td>\n</tr>`;
+    // an alias (an anchor of an earlier build that names this row) is an empty element inside it, so old links land here
+    const aliases = (r.aliases ?? []).map((a) => `<span id="${e(a)}"></span>`).join("");
+    row += `<td class="k-link">${aliases}<a class="row-link" href="#${anchor}" aria-label="Link to this row">#</a></td>\n</tr>`;
     out.push(row);
   }
   return out.join("");

@@ -69,6 +69,8 @@ export interface TableSpec<R> {
   /** The species JSON export holding the same rows. */
   exportUrl?: string;
   anchor: (row: R, index: number) => string;
+  /** Anchors of earlier builds that now name this row (Row.aliases); none when absent. */
+  aliases?: (row: R) => string[];
   columns: ColumnSpec<R>[];
 }
 
@@ -76,7 +78,10 @@ export interface TableSpec<R> {
 export function makeTable<R>(spec: TableSpec<R>, rows: readonly R[]): Table {
   const specs = spec.columns.filter((c) => c.when !== false);
   const columns: Column[] = specs.map(({ cell: _cell, when: _when, ...col }) => col);
-  const out: Row[] = rows.map((r, i) => ({ anchor: spec.anchor(r, i), cells: specs.map((c) => c.cell(r, i)) }));
+  const out: Row[] = rows.map((r, i) => {
+    const aliases = spec.aliases?.(r) ?? [];
+    return { anchor: spec.anchor(r, i), ...(aliases.length ? { aliases } : {}), cells: specs.map((c) => c.cell(r, i)) };
+  });
   zeroNoise(out, columns);
   return alignTable({
     id: spec.id,

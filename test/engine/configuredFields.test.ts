@@ -28,9 +28,9 @@ describe("field calculator at the configured fields of the demo data", () => {
     });
   }
 
-  it("exercises all three line models and the fine-structure terms", () => {
+  it("exercises all four line models, the term solver's with and without nuclear spin among them", () => {
     const models = new Set<string>();
     for (const sp of species) for (const f of configured) for (const ln of engineAt(sp.data, f.tesla.toNumber()).lines) models.add(ln.model);
-    expect([...models].sort()).toEqual(["J-resolved linear pattern", "fine-structure Paschen–Back eigenstates", "hyperfine–Zeeman eigenstates"]);
+    expect([...models].sort()).toEqual(["J-resolved linear pattern", "hyperfine–Zeeman eigenstates", "term Zeeman eigenstates", "term hyperfine–Zeeman eigenstates"]);
   });
 });

@@ -3,13 +3,14 @@
  * lineModel.ts), shared by the exact build and the field calculator: its
  * worked examples on the demo data, the Dec and float64 regime functions
  * agreeing, and each branch of the choice. The rule is this project's
- * convention (Methods page); the expected models are what it states.
+ * convention (Methods page); the expected models are what it states. Which
+ * demo levels have listed partners is read from data/species/*.yaml.
  */
 import { describe, expect, it } from "vitest";
 import { Dec } from "../../src/physics/decimal.js";
 import { computeSpecies } from "../../src/results/computeSpecies.js";
 import { computeFields } from "../../src/results/computeFields.js";
-import { chooseLineModel, levelRegime, levelRegimeFloat, strongerRegime, type LineSide } from "../../src/results/lineModel.js";
+import { chooseLineModel, hadFineStructureLabels, levelRegime, levelRegimeFloat, strongerRegime, type LineSide } from "../../src/results/lineModel.js";
 import { loadDemo } from "../engine/demo.js";
 
 const { folder, constants } = loadDemo();
@@ -22,24 +23,47 @@ function lineAt(speciesId: string, lineId: string, tesla: string) {
 
 describe("chooseLineModel", () => {
   it("repeats its worked examples on the demo data", () => {
-    expect(lineAt("rb87", "D2", "0.0001")).toEqual(["intermediate", "hyperfine–Zeeman eigenstates"]);
-    expect(lineAt("ca40-ion", "397", "1")).toEqual(["linear Zeeman", "J-resolved linear pattern"]);
-    expect(lineAt("ca40-ion", "397", "10")).toEqual(["intermediate", "fine-structure Paschen–Back eigenstates"]);
+    expect(lineAt("rb87", "D2", "0.0001")).toEqual(["intermediate", "term hyperfine–Zeeman eigenstates"]);
+    expect(lineAt("ca40-ion", "729", "1")).toEqual(["linear Zeeman", "term Zeeman eigenstates"]);
+    expect(lineAt("ca40-ion", "397", "1")).toEqual(["linear Zeeman", "term Zeeman eigenstates"]);
+    expect(lineAt("ca40-ion", "397", "10")).toEqual(["intermediate", "term Zeeman eigenstates"]);
+    // no partners listed (87Sr lists ³P₀ and ³P₁ but not ³P₂; Cd has one level per term)
+    expect(lineAt("sr87", "689", "0.1")[1]).toBe("hyperfine–Zeeman eigenstates");
+    expect(lineAt("cd114", "229", "1")[1]).toBe("J-resolved linear pattern");
   });
 
-  it("takes each branch of the rule", () => {
+  it("takes each branch of the rule: the model follows the levels, never the regime", () => {
     const side = (hf: LineSide["hf"], fs: LineSide["fs"], inTerm: boolean): LineSide => ({ hf, fs, inTerm });
     const e1 = { sameSpin: true, multipole: "E1" as const, hyperfineBoth: true };
     const weak = side("linear Zeeman", "linear Zeeman", true);
     const mixed = side("Paschen–Back", "intermediate", true);
-    expect(chooseLineModel(mixed, weak, e1)).toEqual({ regime: "Paschen–Back", model: "fine-structure Paschen–Back eigenstates" });
-    // M1, a change of spin, or no treated term: the fine-structure states are not used
-    expect(chooseLineModel(mixed, weak, { ...e1, multipole: "M1" }).model).toBe("hyperfine–Zeeman eigenstates");
-    expect(chooseLineModel(mixed, weak, { ...e1, sameSpin: false }).model).toBe("hyperfine–Zeeman eigenstates");
+    const term = { model: "term hyperfine–Zeeman eigenstates", reduced: "LS" };
+    expect(chooseLineModel(mixed, weak, e1)).toEqual({ regime: "Paschen–Back", ...term });
+    // the same model at weak field and at zero field: no regime threshold
+    expect(chooseLineModel(weak, weak, e1)).toEqual({ regime: "linear Zeeman", ...term });
+    expect(chooseLineModel(side("zero field", "zero field", true), side("zero field", "zero field", false), e1)).toEqual({ regime: "zero field", ...term });
+    // M1 or a change of spin: the term states, with the line's own J pair only
+    expect(chooseLineModel(mixed, weak, { ...e1, multipole: "M1" })).toEqual({ regime: "Paschen–Back", model: "term hyperfine–Zeeman eigenstates", reduced: "own J pair" });
+    expect(chooseLineModel(mixed, weak, { ...e1, sameSpin: false }).reduced).toBe("own J pair");
+    // no nuclear spin: the term states without hyperfine structure
+    expect(chooseLineModel(weak, { ...weak, inTerm: false }, { ...e1, hyperfineBoth: false }).model).toBe("term Zeeman eigenstates");
+    // neither level in a listed term
     expect(chooseLineModel({ ...mixed, inTerm: false }, { ...weak, inTerm: false }, e1).model).toBe("hyperfine–Zeeman eigenstates");
-    expect(chooseLineModel(weak, weak, { ...e1, hyperfineBoth: false })).toEqual({ regime: "linear Zeeman", model: "J-resolved linear pattern" });
-    expect(chooseLineModel(side("zero field", "zero field", false), side("zero field", "zero field", false), e1).regime).toBe("zero field");
+    expect(chooseLineModel({ ...weak, inTerm: false }, { ...weak, inTerm: false }, { ...e1, hyperfineBoth: false })).toEqual({
+      regime: "linear Zeeman",
+      model: "J-resolved linear pattern",
+      reduced: "own J pair",
+    });
     expect(strongerRegime("intermediate", "linear Zeeman")).toBe("intermediate");
+  });
+
+  it("says where builds before the term solver labelled components by fine-structure states (the rule they used)", () => {
+    const side = (fs: LineSide["fs"], inTerm: boolean): LineSide => ({ hf: "Paschen–Back", fs, inTerm });
+    const e1 = { sameSpin: true, multipole: "E1" as const, hyperfineBoth: true };
+    expect(hadFineStructureLabels(side("intermediate", true), side("linear Zeeman", false), e1)).toBe(true);
+    expect(hadFineStructureLabels(side("linear Zeeman", true), side("linear Zeeman", false), e1)).toBe(false);
+    expect(hadFineStructureLabels(side("intermediate", true), side("linear Zeeman", false), { ...e1, multipole: "M1" })).toBe(false);
+    expect(hadFineStructureLabels(side("intermediate", false), side("linear Zeeman", false), e1)).toBe(false);
   });
 
   it("places a field against a level's limits the same way in Dec and in float64", () => {
