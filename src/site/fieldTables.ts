@@ -113,7 +113,7 @@ export function solverFact(l: LevelResult, f: LevelFieldResult): string {
   const basis = nuclear ? "|J, mJ, mI⟩" : "|J, mJ⟩";
   const m = nuclear ? "M = mJ + mI" : "mJ";
   return [
-    `Solved together with its fine-structure partner${sv.partners.length > 1 ? "s" : ""} ${others} as one term (${sv.term}), at every field: the term Hamiltonian in ${basis} over J = ${jList(sv.J2s)}, block by block in ${m}, diagonalized exactly.`,
+    `Solved together with its fine-structure partner${sv.partners.length > 1 ? "s" : ""} ${others} as one term (${sv.term}), at every field: the term Hamiltonian in ${basis} over J = ${jList(sv.J2s)}, block by block in ${m}, diagonalized in 60-digit decimal arithmetic.`,
     nuclear
       ? "The listed level energies give the fine structure; each level's A and B its hyperfine structure within its own J; hyperfine matrix elements between different J are not included."
       : "The listed level energies give the fine structure.",

@@ -15,7 +15,7 @@ import { exportText, type Dec } from "../physics/decimal.js";
 import { pageSlug } from "../data/ids.js";
 import { formatDoubled } from "../physics/quantum.js";
 import type { SpeciesFieldResult } from "../results/computeFields.js";
-import type { ConfiguredField, LineAtFieldResult } from "../results/fieldTypes.js";
+import type { ConfiguredField, LevelFieldResult, LineAtFieldResult } from "../results/fieldTypes.js";
 import type { LevelResult, LineResult, SpeciesResult } from "../results/types.js";
 import {
   levelAnchor,
@@ -34,6 +34,9 @@ import {
   hyperfineComponentsTable,
   hyperfineGroupsTable,
   levelPlots,
+  lineModelText,
+  modelBasis,
+  solverFact,
   termFacts,
   termTable,
   transitionsTable,
@@ -89,7 +92,8 @@ export interface OverviewView extends PageCommon {
   lines: Table;
   fieldsText: string[];
   /** Energies per level; a level without a page of its own keeps its field section's anchor here. */
-  energies: { levelId: string; levelUrl: string | null; sectionAnchor: string | null; table: Table | null }[];
+  /** Per level: its energies at the bias fields, and which solver gave them (fieldTables.ts solverFact). */
+  energies: { levelId: string; levelUrl: string | null; sectionAnchor: string | null; solver: string; table: Table | null }[];
   /** Fine-structure terms; the states table is on the term's own page (url) when the overview is compacted (3). */
   terms: { anchor: string; key: string; facts: string[]; table: Table | null; url: string | null }[];
   lineLinks: { lineId: string; url: string; summary: string }[];
@@ -130,6 +134,10 @@ export interface AtFieldView {
   heading: string;
   regime: string;
   model: string;
+  /** The basis of the model, for the heading (fieldTables.ts modelBasis). */
+  basis: string;
+  /** Which solver each level's states come from, the reduced elements, what is left out, how gJ enters (empty for the linear pattern). */
+  modelText: string;
   plot: string;
   /** Null where the components sit at their linear shifts and the line has no wavelength (the J-resolved table says it all). */
   table: Table | null;
@@ -296,6 +304,7 @@ export function overviewView(v: SpeciesViewsInput, compact: OverviewCompaction =
       levelId: l.input.id,
       levelUrl: levelUrl(l),
       sectionAnchor: levelUrl(l) ? null : levelFieldSectionAnchor(l.input.id),
+      solver: solverFact(l, v.fields.levels.get(l.input.id)!),
       table: compact >= 1 && levelUrl(l) ? null : energiesTable(l, v.fields.levels.get(l.input.id)!, v.configured, home, false),
     })),
     terms: v.fields.terms.map((t) => ({
@@ -347,7 +356,7 @@ export function levelViews(
       termParts: termParts(l.input.term),
       anchor: levelFieldSectionAnchor(l.input.id),
       axisIndex: i + 1,
-      facts: validityFacts(f),
+      facts: [solverFact(l, f), ...validityFacts(f)],
       sublevelShifts: [...(compact >= 5 ? [mJTable(l, home), hyperfineTable(l, home)] : []), ...(compact >= 2 ? [hyperfineSublevelsTable(l, home)] : [])],
       energies: energiesTable(l, f, v.configured, home, true),
       plots: levelPlots(l, f, v.configured),
@@ -394,7 +403,7 @@ export function levelViews(
   return { levels, transitions };
 }
 
-function atFieldView(ln: LineResult, a: LineAtFieldResult, home: TableHome): AtFieldView {
+function atFieldView(ln: LineResult, a: LineAtFieldResult, home: TableHome, levelOf: (id: string) => LevelFieldResult): AtFieldView {
   const tesla = exportText(a.field.tesla, 30);
   return {
     anchor: lineAtFieldAnchor(ln.input.id, tesla),
@@ -402,6 +411,8 @@ function atFieldView(ln: LineResult, a: LineAtFieldResult, home: TableHome): AtF
     heading: `at ${a.field.text}`,
     regime: a.regime,
     model: a.model,
+    basis: modelBasis(a),
+    modelText: lineModelText(ln, a, levelOf),
     plot: atFieldPlot(ln, a),
     // the linear pattern gets a table too when the line has a wavelength: its absolute frequencies
     table: a.model === "J-resolved linear pattern" && ln.frequencyHz === null ? null : atFieldTable(ln, a, home),
@@ -439,7 +450,7 @@ export function lineViews(
     ];
     const positive = f.atFields.filter((a) => a.field.tesla.gt(0));
     const separate = split(ln.input.id);
-    const atFields = positive.map((a) => atFieldView(ln, a, home));
+    const atFields = positive.map((a) => atFieldView(ln, a, home, (lid) => v.fields.levels.get(lid)!));
     lines.push({
       kind: "line",
       path: linePagePath(id, ln.input.id),

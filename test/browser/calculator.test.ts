@@ -133,7 +133,7 @@ describe.skipIf(!hasChromium)("field calculator in the browser", () => {
     await statusOf(page);
     expect(await kinds()).toEqual([0, 0, 1]);
     const caption = await page.textContent(".calc-results table.calc-components caption");
-    expect(caption).toBe("D2 at 4.7 G: components (hyperfine–Zeeman eigenstates)");
+    expect(caption).toBe("D2 at 4.7 G: components (term hyperfine–Zeeman eigenstates)");
   });
 
   it("says what is wrong with a field, and what is missing", async () => {
