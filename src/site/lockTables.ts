@@ -9,6 +9,7 @@ import { Dec, exportText } from "../physics/decimal.js";
 import type { HyperfineLineGroup } from "../physics/hyperfineLines.js";
 import { lockPoints, strongestTransition, vacuumWavelength, type LockPoint } from "../physics/lockPoints.js";
 import { SPEED_OF_LIGHT } from "../physics/units.js";
+import { inAirFormulaRange, vacuumToAir } from "../physics/airWavelength.js";
 import type { LineResult } from "../results/types.js";
 import { lineLockAnchor, lockPointAnchor } from "./anchors.js";
 import { EXPORT_DIGITS } from "./exportJson.js";
@@ -38,6 +39,17 @@ export function absoluteDigits(hz: Dec): number {
 export const frequencyCell = (hz: Dec | null): Cell => numberCell(hz === null ? null : hz.div(THZ), hz === null ? 1 : absoluteDigits(hz));
 
 /** A vacuum wavelength c/ν in nm, with as many significant digits as the frequency beside it. */
+/**
+ * The standard-air wavelength of c/ν in nm (physics/airWavelength.ts), to 9
+ * significant digits: the air formula holds to about 1e-8 in n, so more
+ * digits would claim what it does not give.
+ */
+export function airWavelengthOfCell(hz: Dec | null): Cell {
+  if (hz === null) return numberCell(null);
+  const vac = vacuumWavelength(hz, SPEED_OF_LIGHT);
+  return inAirFormulaRange(vac) ? numberCell(vacuumToAir(vac).div(NM), 9) : textCell("outside the range of the air formula");
+}
+
 export const wavelengthCell = (hz: Dec | null): Cell => numberCell(hz === null ? null : vacuumWavelength(hz, SPEED_OF_LIGHT).div(NM), hz === null ? 1 : absoluteDigits(hz));
 
 /** A frequency in Hz shown in MHz to 1 kHz, as the offset-from-reference column (lockOffsets.ts). */
@@ -95,6 +107,7 @@ export function lockView(ln: LineResult, groups: HyperfineLineGroup[] | null, ho
         { key: "Fu", label: "F′ upper", kind: "text", cell: (p) => textCell(levels(p.Fu2)) },
         { key: "nu", label: "frequency", unit: "THz", kind: "number", cell: (p) => frequencyCell(p.frequencyHz) },
         { key: "lambda", label: "vacuum wavelength", unit: "nm", kind: "number", cell: (p) => wavelengthCell(p.frequencyHz) },
+        { key: "lambda_air", label: "air wavelength", unit: "nm", kind: "number", cell: (p) => airWavelengthOfCell(p.frequencyHz) },
         { key: "off", label: "offset from line centre", unit: "MHz", kind: "number", cell: (p) => mhzCell(p.offset) },
         { key: "S", label: "strength (of line)", kind: "fraction", cell: (p) => fractionCell(p.strength) },
         { key: "pair", label: "pair spacing", unit: "MHz", kind: "number", cell: (p) => mhzCell(p.kind === "crossover" ? p.spacing : null) },

@@ -10,6 +10,7 @@ import { dec } from "../../src/physics/decimal.js";
 import { computeSpecies } from "../../src/results/computeSpecies.js";
 import { airWavelengthCell, linesTable } from "../../src/site/linearTables.js";
 import { lorentzWavelengthText, wavelengthSplitTable, wavelengthsText } from "../../src/site/wavelengthSplitting.js";
+import { airWavelengthOfCell } from "../../src/site/lockTables.js";
 
 const demo = loadDataFolder("data");
 const constants = editionByName(demo.site.constants)!;
@@ -50,5 +51,16 @@ describe("wavelengths on the pages", () => {
     const pm = t.columns.findIndex((c) => c.key === "sigma" && c.unit === "pm");
     // rule above with g = g_eff ≈ 5/2 (textbook LS; 2.5035 with gS = 2.00232): 2 × 4.6686e-13 × 6304.24² × 2.5035 × 1e4 G ≈ 0.929 Å
     expect(Number(at1T.cells[pm]!.sort)).toBeCloseTo(92.9, 1);
+  });
+
+  it("lock-point table gives the air wavelength of a frequency, to 9 digits", () => {
+    // c = 299 792 458 m/s (SI); Na D2 at 589.1583264 nm in vacuum and 588.9950954 nm in air (from memory:
+    // D. A. Steck, "Sodium D Line Data"; the handbook's air formula differs from the IAU one by about 1.5e-8 here)
+    const hz = dec("299792458").div(dec("589.1583264e-9"));
+    expect(Math.abs(Number(airWavelengthOfCell(hz).sort) - 588.9950954)).toBeLessThan(2e-5);
+    // shown to 9 significant digits
+    expect(airWavelengthOfCell(hz).text.replace(/\s/g, "")).toBe("588.995086");
+    // H Lyman α, 121.567 nm (NIST ASD, from memory), below the formula's range
+    expect(airWavelengthOfCell(dec("299792458").div(dec("121.567e-9"))).text).toBe("outside the range of the air formula");
   });
 });
