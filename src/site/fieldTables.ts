@@ -28,7 +28,7 @@ import { stickPlotSvg } from "./plots/stickPlot.js";
 import { csvName, safeFile, type TableHome } from "./linearTables.js";
 import { fractionCell, numberCell, quantumCell, textCell, type Table } from "./table.js";
 import { makeTable } from "./tableSpec.js";
-import { frequencyCell, wavelengthCell } from "./lockTables.js";
+import { airWavelengthOfCell, frequencyCell, wavelengthCell } from "./lockTables.js";
 import { absoluteFrequency } from "../physics/lockPoints.js";
 
 const MHZ = new Dec("1e6");
@@ -260,6 +260,7 @@ export function hyperfineGroupsTable(ln: LineResult, groups: HyperfineLineGroup[
         { key: "off", label: "offset from line centre", unit: "MHz", kind: "number", cell: (g) => numberCell(g.offset.div(MHZ), 10) },
         { key: "nu", label: "frequency", unit: "THz", kind: "number", when: nu0 !== null, cell: (g) => frequencyCell(absoluteFrequency(nu0!, g.offset)) },
         { key: "lambda", label: "vacuum wavelength", unit: "nm", kind: "number", when: nu0 !== null, cell: (g) => wavelengthCell(absoluteFrequency(nu0!, g.offset)) },
+        { key: "lambda_air", label: "air wavelength", unit: "nm", kind: "number", when: nu0 !== null, cell: (g) => airWavelengthOfCell(absoluteFrequency(nu0!, g.offset)) },
         { key: "gFu", label: "gF upper", kind: "number", cell: (g) => numberCell(g.gFu, 9) },
         { key: "gFl", label: "gF lower", kind: "number", cell: (g) => numberCell(g.gFl, 9) },
       ],
