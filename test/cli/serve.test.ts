@@ -97,3 +97,27 @@ describe("npm run serve", () => {
     expect(await served.stop()).toBe(0);
   }, 60_000);
 });
+
+describe("npm run serve with data that does not build from the start", () => {
+  it("answers every page with the build's message until a save builds, then serves the site", async () => {
+    const first = tempDir("atlas-serve-broken-");
+    const broken = await startServe(first, (data) => writeFileSync(join(data, "species", "sr88.yaml"), SR88.replace("term: 3Po1", "term: 3Qo1")));
+    try {
+      const failed = await waitForState(broken.url, (s) => s.error !== null && !s.building);
+      expect(failed.version).toBe(0);
+      const page = await fetch(new URL("species/sr88/index.html", broken.url));
+      expect(page.status).toBe(503);
+      const html = await page.text();
+      expect(html).toContain("No build yet");
+      expect(html).toMatch(/sr88\.yaml:\d+:\d+: /);
+      expect(html).toContain('<script src="/__atlas_reload.js?v=0" defer></script>');
+
+      writeFileSync(join(broken.data, "species", "sr88.yaml"), SR88);
+      await waitForState(broken.url, (s) => s.version === 1 && s.error === null && !s.building);
+      expect((await fetch(new URL("species/sr88/index.html", broken.url))).status).toBe(200);
+    } finally {
+      expect(await broken.stop()).toBe(0);
+      rmSync(first, { recursive: true, force: true });
+    }
+  }, 300_000);
+});

@@ -13,9 +13,10 @@ export interface Served {
   stop: () => Promise<number | null>;
 }
 
-/** Start the preview on port 0 and wait (bounded) for its address. */
-export async function startServe(parent: string): Promise<Served> {
+/** Start the preview on port 0 (after `edit` has changed the data folder, if given) and wait (bounded) for its address. */
+export async function startServe(parent: string, edit?: (data: string) => void): Promise<Served> {
   const data = smallDataFolder(parent);
+  edit?.(data);
   const out = join(parent, "_site");
   const child = spawn(process.execPath, ["--import", "tsx", join(ROOT, "src/cli/serve.ts"), "--port", "0"], {
     cwd: ROOT,
