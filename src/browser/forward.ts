@@ -25,9 +25,11 @@ function wantedId(): string | null {
   }
 }
 
-function go(map: MovedMap, id: string): void {
-  const k = map.ids[id];
+function go(map: MovedMap, old: string): void {
+  const renamed = map.renamed?.[old];
+  const k = renamed ? renamed[0] : map.ids[old];
   if (k === undefined) return;
+  const id = renamed ? renamed[1] : old;
   const target = new URL(map.pages[k]!, location.href);
   target.hash = "#" + encodeURIComponent(id).replace(/%2F/g, "/").replace(/%3A/g, ":").replace(/%3D/g, "=").replace(/%2C/g, ",").replace(/%2B/g, "+");
   location.replace(target.href);

@@ -49,7 +49,12 @@ export function writeAnchors(siteDir: string): { pages: number; anchors: number 
       const file = join(siteDir, folder, MOVED_FILE);
       if (!p.endsWith("index.html") || !existsSync(file)) continue;
       const map = parseMovedScript(readFileSync(file, "utf8"));
-      const entries = Object.entries(map.ids).map(([id, k]) => `      ${JSON.stringify(id)}: ${JSON.stringify(folder + map.pages[k]!)}`);
+      const entries = [
+        ...Object.entries(map.ids).map(([id, k]) => [id, folder + map.pages[k]!] as const),
+        ...Object.entries(map.renamed ?? {}).map(([id, [k, to]]) => [id, `${folder}${map.pages[k]!}#${to}`] as const),
+      ]
+        .sort((a, b) => byCodePoint(a[0], b[0]))
+        .map(([id, to]) => `      ${JSON.stringify(id)}: ${JSON.stringify(to)}`);
       put(`${first ? "" : ","}\n    ${JSON.stringify(p)}: {\n${entries.join(",\n")}\n    }`);
       first = false;
     }

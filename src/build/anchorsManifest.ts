@@ -20,7 +20,7 @@ export interface AnchorsManifest {
   format: string;
   /** Page path relative to the site root (e.g. "species/rb87/index.html") → its ids, sorted. */
   pages: Record<string, string[]>;
-  /** Page path → id that moved → the page (site-root path) that holds it now. */
+  /** Page path → id that moved → the page (site-root path) that holds it now, or "page#id" when its form changed too. */
   forwards: Record<string, Record<string, string>>;
 }
 
@@ -74,7 +74,8 @@ export function compareManifests(before: AnchorsManifest, after: AnchorsManifest
     for (const anchor of before.pages[page] ?? []) {
       if (has(page, anchor)) continue;
       const target = after.forwards[page]?.[anchor];
-      if (target !== undefined && has(target, anchor)) moved.push({ page, anchor, to: `${target}#${anchor}` });
+      const [toPage, toId] = target === undefined ? [undefined, anchor] : target.includes("#") ? [target.slice(0, target.indexOf("#")), target.slice(target.indexOf("#") + 1)] : [target, anchor];
+      if (toPage !== undefined && has(toPage, toId)) moved.push({ page, anchor, to: `${toPage}#${toId}` });
       else lost.push({ page, anchor, pageGone: after.pages[page] === undefined });
     }
   }

@@ -17,6 +17,16 @@ const PREFIX = "window.SublevelAtlasMoved = ";
 export interface MovedMap {
   pages: string[];
   ids: Record<string, number>;
+  /** Ids whose form changed as well as their page: old id → [index into pages, the id there]. */
+  renamed?: Record<string, [number, string]>;
+}
+
+/** An id this page once had in another form: where its element is now. */
+export interface AnchorAlias {
+  id: string;
+  /** Folder of the page that has the element. */
+  path: string;
+  target: string;
 }
 
 export interface PageIds {
@@ -29,7 +39,7 @@ export interface PageIds {
  * The map of `page`: ids of the pages below it that it lacks, each sent to
  * the first page (by path) that has it. Null when there is nothing to send.
  */
-export function movedMap(page: PageIds, all: readonly PageIds[]): MovedMap | null {
+export function movedMap(page: PageIds, all: readonly PageIds[], aliases: readonly AnchorAlias[] = []): MovedMap | null {
   const own = new Set(page.ids);
   const below = all.filter((p) => p.path !== page.path && p.path.startsWith(page.path)).sort((a, b) => byCodePoint(a.path, b.path));
   const pages: string[] = [];
@@ -42,10 +52,18 @@ export function movedMap(page: PageIds, all: readonly PageIds[]): MovedMap | nul
       ids[id] = index;
     }
   }
+  const renamed: Record<string, [number, string]> = {};
+  for (const a of [...aliases].sort((x, y) => byCodePoint(x.id, y.id))) {
+    if (own.has(a.id) || a.id in ids || !a.path.startsWith(page.path) || a.path === page.path) continue;
+    const file = `${a.path.slice(page.path.length)}index.html`;
+    let k = pages.indexOf(file);
+    if (k < 0) k = pages.push(file) - 1;
+    renamed[a.id] = [k, a.target];
+  }
   if (pages.length === 0) return null;
   const sorted: Record<string, number> = {};
   for (const id of Object.keys(ids).sort(byCodePoint)) sorted[id] = ids[id]!;
-  return { pages, ids: sorted };
+  return Object.keys(renamed).length ? { pages, ids: sorted, renamed } : { pages, ids: sorted };
 }
 
 /** Does `page` have pages below it (and so, possibly, a map)? */

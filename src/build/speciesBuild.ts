@@ -13,14 +13,14 @@ import { computeFields } from "../results/computeFields.js";
 import type { ConfiguredField } from "../results/fieldTypes.js";
 import { tableCsv } from "../site/csv.js";
 import { speciesExport } from "../site/exportJson.js";
-import { exportPath, htmlFile, sheetPath, speciesPath } from "../site/pageUrls.js";
+import { exportPath, htmlFile, levelPagePath, sheetPath, speciesPath } from "../site/pageUrls.js";
 import { searchData, type SearchData, type SearchSpecies, type SearchTransition } from "../site/searchIndex.js";
 import { fieldText } from "../site/fieldTables.js";
 import { sheetAddress, speciesSheet, type SpeciesSheet } from "../site/sheet.js";
 import { scanIds } from "../site/idScan.js";
 import type { Table } from "../site/table.js";
 import { hasLevelPage, levelViews, lineViews, overviewView, termViews, type OverviewCompaction, type PageView, type SpeciesViewsInput } from "../site/speciesViews.js";
-import { hasPagesBelow, movedMap, movedScript, MOVED_FILE, type PageIds } from "./forwarding.js";
+import { hasPagesBelow, movedMap, movedScript, MOVED_FILE, type AnchorAlias, type PageIds } from "./forwarding.js";
 import type { RenderPage } from "./renderPages.js";
 import { timed } from "./timings.js";
 import { CALCULATOR_PARTIAL, writeEngineData } from "./writeEngineData.js";
@@ -84,7 +84,13 @@ function tablesOf(view: PageView): Table[] {
     case "term":
       return [view.table];
     case "line":
-      return [view.components, ...(view.hyperfine ? [view.hyperfine, view.hyperfineComponents!] : []), ...(view.lock ? [view.lock.table] : []), ...(view.atFields ?? []).flatMap((a) => (a.table ? [a.table] : []))];
+      return [
+        view.components,
+        ...(view.hyperfine ? [view.hyperfine, view.hyperfineComponents!] : []),
+        ...(view.lock ? [view.lock.table] : []),
+        ...(view.wavelengthSplit ? [view.wavelengthSplit.table] : []),
+        ...(view.atFields ?? []).flatMap((a) => (a.table ? [a.table] : [])),
+      ];
     case "line-field":
       return view.atField.table ? [view.atField.table] : [];
   }
@@ -97,14 +103,17 @@ export function buildSpecies(input: SpeciesInput, ctx: SpeciesBuildContext): Spe
   const id = input.id;
   const v: SpeciesViewsInput = { result, fields, configured: ctx.configured, muB_h: val(ctx.constants.muB_h) };
   const atlas = ctx.frame;
-  const csv = new Map<string, string>();
-  const rendered: { view: PageView; html: string }[] = [];
+  // Every page is written as soon as it is final; only its path and ids are kept (for the forwarding maps and the search index).
+  const ids: PageIds[] = [];
   const render = (view: PageView, movedAnchors: string | null) =>
     timed("render", () => ctx.render(`species/${view.kind}.njk`, `/${htmlFile(view.path)}`, { view, atlas, pageTitle: view.title, movedAnchors, calculatorPartial: CALCULATOR_PARTIAL }));
 
   const keep = (view: PageView, html: string) => {
-    rendered.push({ view, html });
-    for (const t of tablesOf(view)) if (t.csvPath) csv.set(t.csvPath, tableCsv(t));
+    ids.push({ path: view.path, ids: scanIds(html) });
+    timed("write", () => {
+      ctx.write(htmlFile(view.path), html);
+      for (const t of tablesOf(view)) if (t.csvPath) ctx.write(t.csvPath, tableCsv(t));
+    });
   };
   const tooLarge = (html: string, limit = PAGE_LIMIT) => Buffer.byteLength(html) > limit;
   // Every species has pages below its overview (a level or a line page) when it has a line or a level with hyperfine structure.
@@ -120,53 +129,67 @@ export function buildSpecies(input: SpeciesInput, ctx: SpeciesBuildContext): Spe
     overviewHtml = render(overview, overviewMoved);
   }
 
-  // Line pages: a page that is too large is rendered again split, first one page per
-  // bias field, then (for a field that is still too large) one page per polarization.
+  // Line pages, one line at a time: a page that is too large is rendered again split, first
+  // one page per bias field, then (for a field that is still too large) one page per polarization.
   const splitLines = new Set<string>();
   const splitFields = new Set<string>();
   const fieldKey = (lineId: string, tesla: string) => `${lineId}\u0000${tesla}`;
-  for (;;) {
-    const views = timed("views", () => lineViews(v, (l) => splitLines.has(l), (l, t) => splitFields.has(fieldKey(l, t))));
-    const pages = [...views.lines, ...views.lineFields].map((view) => ({ view, html: render(view, null) }));
-    let again = false;
-    for (const { view, html } of pages) {
-      if (!tooLarge(html)) continue;
-      if (view.kind === "line" && !splitLines.has(view.lineId)) (splitLines.add(view.lineId), (again = true));
-      else if (view.kind === "line-field" && view.polarization === null && !splitFields.has(fieldKey(view.lineId, view.tesla))) {
-        splitFields.add(fieldKey(view.lineId, view.tesla));
-        again = true;
+  const final = (pages: { view: PageView; html: string }[]) => {
+    const below = (view: PageView) => pages.some((p) => p.view !== view && p.view.path.startsWith(view.path));
+    for (const { view, html } of pages) keep(view, below(view) ? render(view, MOVED_FILE) : html);
+  };
+  for (const line of input.lines) {
+    for (;;) {
+      const views = timed("views", () => lineViews(v, (l) => splitLines.has(l), (l, t) => splitFields.has(fieldKey(l, t)), (l) => l === line.id));
+      const pages = [...views.lines, ...views.lineFields].map((view) => ({ view, html: render(view, null) }));
+      let again = false;
+      for (const { view, html } of pages) {
+        if (!tooLarge(html)) continue;
+        if (view.kind === "line" && !splitLines.has(view.lineId)) (splitLines.add(view.lineId), (again = true));
+        else if (view.kind === "line-field" && view.polarization === null && !splitFields.has(fieldKey(view.lineId, view.tesla))) {
+          splitFields.add(fieldKey(view.lineId, view.tesla));
+          again = true;
+        }
+      }
+      if (!again) {
+        final(pages);
+        break;
       }
     }
-    if (again) continue;
-    const below = (view: PageView) => pages.some((p) => p.view !== view && p.view.path.startsWith(view.path));
-    for (const { view, html } of pages) keep(view, below(view) ? render(view, MOVED_FILE) : html);
-    break;
   }
 
-  // Level pages likewise: one that is too large gets its transitions on a page of their own,
-  // and a transitions page still too large gets one page per lower F.
+  // Level pages likewise, one level at a time: one that is too large gets its transitions on a
+  // page of their own, and a transitions page still too large gets one page per lower F.
   const splitLevels = new Set<string>();
   const byF = new Set<string>();
-  for (;;) {
-    const views = timed("views", () => levelViews(v, (l) => splitLevels.has(l), compact, (l) => byF.has(l)));
-    const pages = [...views.levels, ...views.transitions].map((view) => ({ view, html: render(view, null) }));
-    let again = false;
-    for (const { view, html } of pages) {
-      if (!tooLarge(html)) continue;
-      if (view.kind === "level" && view.transitions && !splitLevels.has(view.levelId)) (splitLevels.add(view.levelId), (again = true));
-      else if (view.kind === "transitions" && view.lowerF2 === null && !byF.has(view.levelId)) (byF.add(view.levelId), (again = true));
+  for (const level of input.levels) {
+    for (;;) {
+      const views = timed("views", () => levelViews(v, (l) => splitLevels.has(l), compact, (l) => byF.has(l), (l) => l === level.id));
+      const pages = [...views.levels, ...views.transitions].map((view) => ({ view, html: render(view, null) }));
+      let again = false;
+      for (const { view, html } of pages) {
+        if (!tooLarge(html)) continue;
+        if (view.kind === "level" && view.transitions && !splitLevels.has(view.levelId)) (splitLevels.add(view.levelId), (again = true));
+        else if (view.kind === "transitions" && view.lowerF2 === null && !byF.has(view.levelId)) (byF.add(view.levelId), (again = true));
+      }
+      if (!again) {
+        final(pages);
+        break;
+      }
     }
-    if (again) continue;
-    const below = (view: PageView) => pages.some((p) => p.view !== view && p.view.path.startsWith(view.path));
-    for (const { view, html } of pages) keep(view, below(view) ? render(view, MOVED_FILE) : html);
-    break;
   }
   if (compact >= 3) for (const t of timed("views", () => termViews(v))) keep(t, render(t, null));
-  const paths = [overview.path, ...rendered.map((r) => r.view.path)];
+  const paths = [overview.path, ...ids.map((p) => p.path)];
   keep(overview, hasPagesBelow(overview.path, paths) === (overviewMoved !== null) ? overviewHtml : render(overview, hasPagesBelow(overview.path, paths) ? MOVED_FILE : null));
 
-  // Forwarding maps, from the ids of the rendered pages.
-  const ids: PageIds[] = rendered.map((r) => ({ path: r.view.path, ids: scanIds(r.html) }));
+  // The plot-axis controls of the one-page layout were numbered by the level's position (axis-label-3);
+  // they are named by level id now, and old links to the numbered forms are forwarded by position.
+  const axisAliases: AnchorAlias[] = [];
+  result.levels.forEach((l, i) => {
+    if (!fields.levels.get(l.input.id)?.plot) return;
+    for (const part of ["label", "lin", "log"]) axisAliases.push({ id: `axis-${part}-${i + 1}`, path: levelPagePath(id, l.input.id), target: `axis-${part}:${l.input.id}` });
+  });
+  // Forwarding maps, from the ids of the written pages.
   // Where each row is, for the search index: the overview first, so a row it shares with a detail page is found there.
   const rowPages = new Map<string, string>();
   for (const page of [...ids].sort((a, b) => Number(b.path === overview.path) - Number(a.path === overview.path))) {
@@ -174,14 +197,10 @@ export function buildSpecies(input: SpeciesInput, ctx: SpeciesBuildContext): Spe
   }
   for (const page of ids) {
     if (!hasPagesBelow(page.path, paths)) continue;
-    const map = movedMap(page, ids);
+    const map = movedMap(page, ids, page.path === overview.path ? axisAliases : []);
     if (map) ctx.write(`${page.path}${MOVED_FILE}`, movedScript(map));
   }
 
-  timed("write", () => {
-    for (const r of rendered) ctx.write(htmlFile(r.view.path), r.html);
-    for (const [path, text] of csv) ctx.write(path, text);
-  });
   const buildInfo = { constantsEdition: ctx.constants.edition, dataVersion: atlas.build.dataVersion };
   const exportJson = timed("export", () => JSON.stringify(speciesExport(result, buildInfo, { result: fields, configured: ctx.configured }), null, 2) + "\n");
   ctx.write(exportPath(id), exportJson);
@@ -209,7 +228,7 @@ export function buildSpecies(input: SpeciesInput, ctx: SpeciesBuildContext): Spe
     },
     sheet: speciesSheet(result, { mList: false }),
     search: timed("search", () => searchData(searchSpecies(v, (rowId) => rowPages.get(rowId) ?? null), ctx.configured.map((f) => ({ text: f.text, tesla: exportText(f.tesla, 30) })))),
-    pages: rendered.length + 1,
+    pages: ids.length + 1,
   };
 }
 

@@ -104,7 +104,11 @@ export interface LevelView extends PageCommon {
   levelId: string;
   termParts: TermParts;
   anchor: string;
-  /** Position of the level in the species (1-based): keeps the plot switch ids of the one-page layout. */
+  /**
+   * Position of the level in the species (1-based). The one-page layout named the plot switch's
+   * controls by it (axis-label-3); they are named by the level id now, and the overview's
+   * forwarding map sends the old names on (speciesBuild.ts, axisAliases).
+   */
   axisIndex: number;
   facts: string[];
   /** The linear shift tables the overview leaves to the level page: (F, mF) from OverviewCompaction 2, mJ and F from 5. */
@@ -329,6 +333,8 @@ export function levelViews(
   compact: OverviewCompaction = 0,
   /** Transitions pages still too large: one page per lower F instead. */
   splitByF: (levelId: string) => boolean = () => false,
+  /** Only these levels (the build takes one level at a time, so its pages are never all in memory). */
+  only: (levelId: string) => boolean = () => true,
 ): { levels: LevelView[]; transitions: TransitionsView[] } {
   const s = v.result;
   const id = s.input.id;
@@ -336,7 +342,7 @@ export function levelViews(
   const levels: LevelView[] = [];
   const transitions: TransitionsView[] = [];
   s.levels.forEach((l, i) => {
-    if (!hasLevelPage(v.fields, l)) return;
+    if (!hasLevelPage(v.fields, l) || !only(l.input.id)) return;
     const f = v.fields.levels.get(l.input.id)!;
     const path = levelPagePath(id, l.input.id);
     const crumbs = [
@@ -435,6 +441,8 @@ export function lineViews(
   v: SpeciesViewsInput,
   split: (lineId: string) => boolean,
   splitField: (lineId: string, tesla: string) => boolean = () => false,
+  /** Only these lines (the build takes one line at a time, so its pages are never all in memory). */
+  only: (lineId: string) => boolean = () => true,
 ): { lines: LineView[]; lineFields: LineFieldView[] } {
   const s = v.result;
   const id = s.input.id;
@@ -442,6 +450,7 @@ export function lineViews(
   const lines: LineView[] = [];
   const lineFields: LineFieldView[] = [];
   for (const ln of s.lines) {
+    if (!only(ln.input.id)) continue;
     const f = v.fields.lines.get(ln.input.id)!;
     const url = `/${linePagePath(id, ln.input.id)}`;
     const crumbs = [

@@ -63,8 +63,13 @@ describe.skipIf(!hasChromium)("old links after the page split, in the browser", 
   }, 600_000);
   afterAll(() => closeDemo(ctx, server));
 
-  /** Where an old link should end: the same page if it still has the id, else the forward's target. */
-  const expected = (page: string, id: string) => (now.pages[page]?.includes(id) ? page : now.forwards[page]?.[id]);
+  /** Where an old link should end: the same page if it still has the id, else the forward's target ("page" or "page#new-id"). */
+  const expected = (page: string, id: string): { page: string; id: string } | undefined => {
+    if (now.pages[page]?.includes(id)) return { page, id };
+    const to = now.forwards[page]?.[id];
+    if (to === undefined) return undefined;
+    return to.includes("#") ? { page: to.slice(0, to.indexOf("#")), id: to.slice(to.indexOf("#") + 1) } : { page: to, id };
+  };
 
   it("covers every kind of anchor the species pages had", () => {
     const kinds = new Set(sample(before).map((s) => kindOf(s.id)));
@@ -77,9 +82,9 @@ describe.skipIf(!hasChromium)("old links after the page split, in the browser", 
     for (const { page: old, id } of sample(before)) {
       const target = expected(old, id);
       expect(target, `${old}#${id}`).toBeDefined();
-      const r = await land(page, `${server.url}${old}#${encodeURI(id)}`, id);
+      const r = await land(page, `${server.url}${old}#${encodeURI(id)}`, target!.id);
       expect(r.found, `${old}#${id}`).toBe(true);
-      expect(r.path, `${old}#${id}`).toBe(`/${target}`);
+      expect(r.path, `${old}#${id}`).toBe(`/${target!.page}`);
     }
     expect(problems).toEqual([]);
     await page.close();
@@ -95,8 +100,8 @@ describe.skipIf(!hasChromium)("old links after the page split, in the browser", 
     ];
     for (const { old, id } of picks) {
       const target = expected(old, id)!;
-      const r = await land(page, `${pathToFileURL(join(site, old)).href}#${encodeURI(id)}`, id);
-      expect(r.path.endsWith(`/${target}`), `${old}#${id} → ${r.path}`).toBe(true);
+      const r = await land(page, `${pathToFileURL(join(site, old)).href}#${encodeURI(id)}`, target.id);
+      expect(r.path.endsWith(`/${target.page}`), `${old}#${id} → ${r.path}`).toBe(true);
     }
     await page.close();
   }, 120_000);

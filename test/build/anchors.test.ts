@@ -36,10 +36,14 @@ describe("anchors.json of a build", () => {
     const overview = "species/rb87/index.html";
     const forwards = manifest.forwards[overview]!;
     expect(forwards["line:D2:mu=3/2,ml=1/2"]).toBe("species/rb87/line/D2/index.html");
-    for (const [id, page] of Object.entries(forwards)) {
-      expect(manifest.pages[page], `${id} → ${page}`).toContain(id);
+    for (const [id, to] of Object.entries(forwards)) {
+      // "page" for an id that kept its form, "page#new-id" for one renamed (the plot switch's numbered controls).
+      const [page, target] = to.includes("#") ? to.split("#") : [to, id];
+      expect(manifest.pages[page!], `${id} → ${to}`).toContain(target);
       expect(manifest.pages[overview]).not.toContain(id);
     }
+    // rb87's first level, 5s 2S1/2, had the plot switch numbered 1 on the one-page layout.
+    expect(forwards["axis-lin-1"]).toBe("species/rb87/level/5s-S1_2/index.html#axis-lin:5s-S1/2");
   });
 
   it("is the same file when the same pages are scanned again", () => {

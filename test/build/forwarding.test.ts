@@ -27,6 +27,13 @@ describe("the forwarding map of a page", () => {
     expect(movedMap(pages[3]!, pages)).toBeNull();
   });
 
+  it("sends an id whose form changed to its new form on the page that has it", () => {
+    const overview = { path: "species/x/", ids: ["main"] };
+    const level = { path: "species/x/level/a/", ids: ["axis-lin:a"] };
+    const map = movedMap(overview, [overview, level], [{ id: "axis-lin-1", path: "species/x/level/a/", target: "axis-lin:a" }]);
+    expect(map).toEqual({ pages: ["level/a/index.html"], ids: { "axis-lin:a": 0 }, renamed: { "axis-lin-1": [0, "axis-lin:a"] } });
+  });
+
   it("reads back the script it writes", () => {
     const map = { pages: ["line/D2/index.html"], ids: { "line:D2:mu=1/2,ml=-1/2": 0 } };
     expect(parseMovedScript(movedScript(map))).toEqual(map);

@@ -63,14 +63,16 @@ describe("check-links against a rebuilt site", () => {
     const r = cli(join(demo, "anchors.json"), join(after, "anchors.json"));
     expect(r.stderr).toBe("");
     expect(r.status).toBe(0);
-    expect(r.stdout).toMatch(/still exist/);
+    expect(r.stdout).toMatch(/, 0 moved and are forwarded, 0 lost$/m);
 
     const now = JSON.parse(readFileSync(join(after, "anchors.json"), "utf8")).pages["species/rb87/index.html"] as string[];
     expect(now).toContain("level:4d-D5/2:F=4");
 
-    // Same id, same row: every row of the old page is unchanged in the new one.
-    const before = rows(readFileSync(join(demo, "species/rb87/index.html"), "utf8"));
-    const later = rows(readFileSync(join(after, "species/rb87/index.html"), "utf8"));
+    // Same id, same row: every row of the old page is unchanged in the new one, but for the spaces that
+    // line decimal points up (the at-a-glance table lists every level, so a new level's digits can widen a column).
+    const unpadded = (m: Map<string, string>) => new Map([...m].map(([id, html]) => [id, html.replace(/<span class="pad">[^<]*<\/span>/g, "")]));
+    const before = unpadded(rows(readFileSync(join(demo, "species/rb87/index.html"), "utf8")));
+    const later = unpadded(rows(readFileSync(join(after, "species/rb87/index.html"), "utf8")));
     expect(before.size).toBeGreaterThan(50);
     for (const [id, html] of before) expect(later.get(id), id).toBe(html);
   }, 300_000);
