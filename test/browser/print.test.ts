@@ -73,6 +73,22 @@ describe.skipIf(!ready)("bench sheets on paper", () => {
     }, 120_000);
   }
 
+  it("fills most of the page with a species sheet: what a bench needs, not a third of a page", async () => {
+    const page = await browser.newPage({ viewport: { width: 794, height: 1123 } });
+    try {
+      // A4 at 96 px/inch is 794 × 1123 px (common practice: 210 × 297 mm); Chromium's default print margins are about 0.4 inch.
+      await page.goto(server.url + "species/rb87/sheet/", { waitUntil: "load" });
+      await page.emulateMedia({ media: "print" });
+      const h = await page.evaluate(() => document.querySelector(".sheet")!.getBoundingClientRect().height);
+      expect(h / (1123 - 2 * 38)).toBeGreaterThan(0.6);
+      const text = await page.evaluate(() => document.querySelector(".sheet")!.textContent ?? "");
+      // 87Rb (data/species/rb87.yaml): hyperfine splittings, the clock transition's field-insensitive point at 0 G, where linear shifts stop holding.
+      for (const words of ["Zero-field hyperfine splittings", "Field-insensitive transitions", "Linear shifts within 1 %", "components: shift in Lorentz units"]) expect(text).toContain(words);
+    } finally {
+      await page.close();
+    }
+  });
+
   it("hides navigation, search, row links and downloads in print", async () => {
     const page = await browser.newPage();
     try {
