@@ -62,7 +62,7 @@ export interface SearchSpecies {
     hyperfine: { F2: number; gF: Dec | null }[];
   }[];
   lines: {
-    input: { id: string; upper: string; lower: string; wavelength: { si: Dec } | null; multipole: string };
+    input: { id: string; upper: string; lower: string; wavelength: { si: Dec } | null; airWavelength?: { si: Dec } | null; multipole: string };
     components: { mu2: number; ml2: number }[];
     pattern: string | null;
   }[];
@@ -220,7 +220,8 @@ export function searchData(s: SearchSpecies, fields: { text: string; tesla: stri
       levelIndex.get(ln.input.lower) ?? -1,
       wl,
       ln.input.multipole,
-      idKeys(ln.input.id),
+      // The air wavelength too, as spectroscopists name lines by it (630.2494 for Fe I 630.25).
+      [idKeys(ln.input.id), ln.input.airWavelength ? ln.input.airWavelength.si.mul("1e9").toSignificantDigits(12).toFixed() : ""].filter(Boolean).join(" "),
       packInts(ln.components.flatMap((c) => [c.mu2, c.ml2])),
       ln.components[0] ? where(componentAnchor(ln.input.id, ln.components[0].mu2, ln.components[0].ml2), linePage) || overview : linePage,
       ln.pattern ?? "",

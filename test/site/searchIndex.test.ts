@@ -141,6 +141,8 @@ describe("search data of the demo site", () => {
     expect(first("rb87 D2")!.href).toBe("species/rb87/index.html#line:D2");
     expect(first("87Rb")!.href).toBe("species/rb87/index.html");
     expect(first("780.24")!.href).toBe("species/rb87/index.html#line:D2");
+    // Fe I 630.25 nm is given in air in data/species/fe56.yaml (NIST ASD air wavelength 630.2494 nm); its vacuum wavelength is 630.42 nm.
+    expect(first("630.2494")!.href).toBe("species/fe56/index.html#line:630.25");
     expect(first("D2")!.kind).toBe("line");
     for (const q of ["3P2", "³P°₂", "3Po2"]) expect(first(q)!.href, q).toMatch(/#level:[^:]*3P2$/);
   });
