@@ -237,8 +237,9 @@ const gIText = (s: SpeciesResult): string => {
   return p ? partsText(p) : formatNumber(s.gI, 12);
 };
 
-/** Levels that get a page of their own: those with hyperfine structure (field tables, plots, transitions). */
-export const hasLevelPage = (s: SpeciesFieldResult, l: LevelResult): boolean => s.levels.get(l.input.id)!.validity !== null;
+/** Levels that get a page of their own: those with hyperfine structure (field tables, plots, transitions), and every level once the overview is compacted. */
+export const hasLevelPage = (s: SpeciesFieldResult, l: LevelResult, compact: OverviewCompaction = 0): boolean =>
+  s.levels.get(l.input.id)!.validity !== null || compact >= 1;
 
 /**
  * How much of a large species the overview leaves to its level pages, so the
@@ -256,7 +257,8 @@ export function overviewView(v: SpeciesViewsInput, compact: OverviewCompaction =
   const s = v.result;
   const id = s.input.id;
   const home: TableHome = { speciesId: id, csvBase: `species/${id}/csv`, exportUrl: exportPath(id) };
-  const levelUrl = (l: LevelResult) => (hasLevelPage(v.fields, l) ? `/${levelPagePath(id, l.input.id)}` : null);
+  // A compacted overview gives every level a page of its own (a level without hyperfine structure too), so its tables have a home.
+  const levelUrl = (l: LevelResult) => (hasLevelPage(v.fields, l, compact) ? `/${levelPagePath(id, l.input.id)}` : null);
   const nucleus = s.input.nucleus;
   const facts = [
     ...(nucleus ? [{ label: "nuclear spin I", value: formatDoubled(nucleus.I2) }, { label: `gI (${s.gIFrom === "moment" ? "from μ" : "given"})`, value: gIText(s) }] : []),
@@ -286,7 +288,7 @@ export function overviewView(v: SpeciesViewsInput, compact: OverviewCompaction =
       summary: ln.summary,
       sketch: patternSketchSvg(`sketch-${safeFile(ln.input.id)}`, ln.input.id, ln.components.map((c) => ({ lorentz: c.shiftLorentz, strength: c.strength.toDecimal(), polarization: c.polarization }))),
     })),
-    levels: levelsTable(s, home, (l) => hasLevelPage(v.fields, l)),
+    levels: levelsTable(s, home, (l) => hasLevelPage(v.fields, l, compact)),
     shiftSections: s.levels.map((l) => {
       return {
         anchor: levelShiftsAnchor(l.input.id),
@@ -342,7 +344,7 @@ export function levelViews(
   const levels: LevelView[] = [];
   const transitions: TransitionsView[] = [];
   s.levels.forEach((l, i) => {
-    if (!hasLevelPage(v.fields, l) || !only(l.input.id)) return;
+    if (!hasLevelPage(v.fields, l, compact) || !only(l.input.id)) return;
     const f = v.fields.levels.get(l.input.id)!;
     const path = levelPagePath(id, l.input.id);
     const crumbs = [
@@ -363,7 +365,11 @@ export function levelViews(
       anchor: levelFieldSectionAnchor(l.input.id),
       axisIndex: i + 1,
       facts: [solverFact(l, f), ...validityFacts(f)],
-      sublevelShifts: [...(compact >= 5 ? [mJTable(l, home), hyperfineTable(l, home)] : []), ...(compact >= 2 ? [hyperfineSublevelsTable(l, home)] : [])],
+      sublevelShifts: [
+        ...(compact >= 5 ? [mJTable(l, home)] : []),
+        ...(compact >= 5 && l.hyperfine.length > 0 ? [hyperfineTable(l, home)] : []),
+        ...(compact >= 2 && l.hyperfine.length > 0 ? [hyperfineSublevelsTable(l, home)] : []),
+      ],
       energies: energiesTable(l, f, v.configured, home, true),
       plots: levelPlots(l, f, v.configured),
       transitions: separate ? null : table,
