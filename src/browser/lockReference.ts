@@ -12,25 +12,8 @@
  */
 import { offsetFrom } from "../site/lockOffsets.js";
 import { alignParts, type NumberParts } from "../site/plainFormat.js";
+import { fillNumberCell as fill } from "./fillNumberCell.js";
 
-/** Cell markup as the server writes it (cellHtml in src/site/tableRows.ts). */
-function fill(td: HTMLTableCellElement, parts: NumberParts): void {
-  const n = document.createElement("span");
-  n.className = "n";
-  n.appendChild(document.createTextNode(parts.sign + parts.int));
-  const fr = document.createElement("span");
-  fr.className = "frac";
-  fr.textContent = parts.frac + parts.exp;
-  n.appendChild(fr);
-  if (parts.pad) {
-    const pad = document.createElement("span");
-    pad.className = "pad";
-    pad.textContent = parts.pad;
-    n.appendChild(pad);
-  }
-  td.textContent = "";
-  td.appendChild(n);
-}
 
 /** Offsets of every row of `table` from the row whose id is `refId`; false when that row or its frequency is missing. */
 export function applyReference(table: HTMLTableElement, refId: string): boolean {

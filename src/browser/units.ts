@@ -11,29 +11,12 @@
  * and readers' scripts; in a context without a document it does nothing else.
  */
 import { alignParts, type NumberParts } from "../site/plainFormat.js";
+import { fillNumberCell as fill } from "./fillNumberCell.js";
 import { convertShift, DEFAULT_SHIFT_UNIT, SHIFT_UNITS } from "../site/shiftUnits.js";
 import { readShiftUnit, saveShiftUnit } from "./shiftUnitChoice.js";
 
 (globalThis as Record<string, unknown>).AtlasUnits = { convert: convertShift, UNITS: SHIFT_UNITS, DEFAULT: DEFAULT_SHIFT_UNIT };
 
-/** Cell markup as the server writes it (cellHtml in src/site/tableRows.ts). */
-function fill(td: HTMLTableCellElement, parts: NumberParts): void {
-  const n = document.createElement("span");
-  n.className = "n";
-  n.appendChild(document.createTextNode(parts.sign + parts.int));
-  const fr = document.createElement("span");
-  fr.className = "frac";
-  fr.textContent = parts.frac + parts.exp;
-  n.appendChild(fr);
-  if (parts.pad) {
-    const pad = document.createElement("span");
-    pad.className = "pad";
-    pad.textContent = parts.pad;
-    n.appendChild(pad);
-  }
-  td.textContent = "";
-  td.appendChild(n);
-}
 
 function apply(unit: string): void {
   for (const table of Array.from(document.querySelectorAll<HTMLTableElement>("table.atlas-table"))) {
