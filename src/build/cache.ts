@@ -20,8 +20,9 @@
  * stand-in is built without the cache.
  *
  * Where: ATLAS_CACHE, else `.atlas-cache/` beside the output folder
- * (`ATLAS_CACHE=off` builds without a cache). Packs are written to a
- * temporary name and renamed, so a killed build never leaves half an entry;
+ * (`ATLAS_CACHE=off` builds without a cache; so do 0, false, no, none).
+ * Packs are written to a temporary name and renamed, so a killed build
+ * never leaves half an entry;
  * after a published build, entries it did not use are dropped (unless
  * another build used them meanwhile), so the cache holds one build's worth.
  * The cache is a speed-up only: a pack that cannot be read is recomputed,
@@ -101,9 +102,9 @@ export function fillStamp(buf: Buffer, sentinel: BuildStamp, stamp: BuildStamp):
   return buf;
 }
 
-/** Where the cache lives for an output folder; null when turned off. */
+/** Where the cache lives for an output folder; null when turned off ("off", or 0/false/no/none, which nobody means as a folder name). */
 export function cacheRoot(out: string, setting: string | undefined): string | null {
-  if (setting === "off") return null;
+  if (setting !== undefined && /^(off|0|false|no|none)$/i.test(setting.trim())) return null;
   return setting ? resolve(setting) : join(dirname(resolve(out)), ".atlas-cache");
 }
 

@@ -6,7 +6,7 @@
  * folder, default "_site"), SOURCE_DATE_EPOCH (build date, for reproducible
  * builds), ATLAS_TIMINGS=1 (print `timing <phase> <ms>` lines to stderr),
  * ATLAS_DEBUG=1 (print the stack of an unexpected failure), ATLAS_CACHE
- * (cache folder, default .atlas-cache/ beside the output; "off" for none;
+ * (cache folder, default .atlas-cache/ beside the output; "off" or 0 for none;
  * see src/build/cache.ts), ATLAS_WORKERS (threads for the species at most,
  * default the available parallelism; 1 builds in this thread).
  * Test only: ATLAS_FAULT=species (fail each species once its files are

@@ -104,6 +104,7 @@ describe("cache keys", () => {
     expect(cacheRoot("/a/b/_site", undefined)).toBe("/a/b/.atlas-cache");
     expect(cacheRoot("/a/b/_site", "/c/cache")).toBe("/c/cache");
     expect(cacheRoot("/a/b/_site", "off")).toBeNull();
+    for (const off of ["0", "false", "No", "none"]) expect(cacheRoot("/a/b/_site", off)).toBeNull();
   });
 });
 
