@@ -12,9 +12,9 @@
  * after it, so the snapshot holds the validated bytes.
  */
 import { createHash } from "node:crypto";
-import { readdirSync, readFileSync } from "node:fs";
+import { readFileSync } from "node:fs";
 import { join } from "node:path";
-import { loadDataFolder } from "../data/loadDataFolder.js";
+import { allFiles, loadDataFolder } from "../data/loadDataFolder.js";
 import type { DataFolder } from "../data/model.js";
 import { MAX_FILE_BYTES } from "../data/yamlExact.js";
 
@@ -23,16 +23,6 @@ export interface DataSnapshot {
   version: string;
   /** Bytes of every file below species/ no larger than the loader accepts, by path relative to the folder ("species/rb87.yaml"). */
   species: Map<string, Buffer>;
-}
-
-function allFiles(dir: string, prefix = ""): string[] {
-  const out: string[] = [];
-  for (const e of readdirSync(join(dir, prefix), { withFileTypes: true })) {
-    const rel = prefix ? `${prefix}/${e.name}` : e.name;
-    if (e.isDirectory()) out.push(...allFiles(dir, rel));
-    else if (e.isFile()) out.push(rel);
-  }
-  return out.sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
 }
 
 /** Read the folder once; null when it cannot be read (the loader then says why). */

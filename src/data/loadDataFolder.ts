@@ -50,7 +50,7 @@ function guarded<T>(sink: ProblemSink, read: () => T): T | null {
 }
 
 /** Every regular file below `dir`, as sorted "/"-separated relative paths. */
-function allFiles(dir: string, prefix = ""): string[] {
+export function allFiles(dir: string, prefix = ""): string[] {
   const out: string[] = [];
   for (const e of readdirSync(join(dir, prefix), { withFileTypes: true })) {
     const rel = prefix ? `${prefix}/${e.name}` : e.name;
