@@ -74,8 +74,10 @@ describe.skipIf(!ready)("bench sheets on paper", () => {
   }
 
   it("fills most of the page with a species sheet: what a bench needs, not a third of a page", async () => {
-    const page = await browser.newPage({ viewport: { width: 794, height: 1123 } });
+    // a context's newPage takes no options: the A4 viewport is set on the page itself
+    const page = await browser.newPage();
     try {
+      await page.setViewportSize({ width: 794, height: 1123 });
       // A4 at 96 px/inch is 794 × 1123 px (common practice: 210 × 297 mm); Chromium's default print margins are about 0.4 inch.
       await page.goto(server.url + "species/rb87/sheet/", { waitUntil: "load" });
       await page.emulateMedia({ media: "print" });
