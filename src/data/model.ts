@@ -4,6 +4,7 @@
  * carries a unit. Quantum numbers are doubled integers (see physics/quantum.ts).
  */
 import type { Dec } from "../physics/decimal.js";
+import type { Multipole } from "../physics/linePattern.js";
 
 export interface SourcePos {
   file: string;
@@ -77,7 +78,8 @@ export interface NucleusInput {
   source: string | null;
 }
 
-export type Multipole = "E1" | "M1" | "E2";
+/** The multipoles a line may be (one list, in src/physics/linePattern.ts). */
+export type { Multipole };
 
 export interface LineInput {
   id: string;

@@ -5,7 +5,7 @@
  * entries (src/site/exportJson.ts): numbers (N = number) from the float64
  * engine, decimal strings (N = string) from the exact `npm run at`.
  */
-import type { Polarization } from "../physics/linePattern.js";
+import type { Multipole, Polarization } from "../physics/linePattern.js";
 import type { LineModel } from "../results/lineModel.js";
 import type { Regime } from "../results/fieldTypes.js";
 
@@ -76,7 +76,7 @@ export interface EngineLine {
   id: string;
   upper: string;
   lower: string;
-  multipole: "E1" | "M1" | "E2";
+  multipole: Multipole;
   /** Multipole rank k. */
   k: number;
   /** Both levels have hyperfine structure in the build's sense (computeFields' hyperfineConstants). */

@@ -7,7 +7,7 @@ import type { ConstantsEdition } from "../physics/constants/constant.js";
 import { val } from "../physics/constants/constant.js";
 import { fValues, gF, hyperfineShift } from "../physics/hyperfine.js";
 import { landeExact, landeLS, orbitalG, spinG } from "../physics/lande.js";
-import { effectiveLande, lineComponents, multipoleRank, patternNotation, patternSummary, QUADRUPOLE_G_EFF_NOTE } from "../physics/linePattern.js";
+import { effectiveLande, gEffNote, lineComponents, multipoleRank, patternNotation, patternSummary } from "../physics/linePattern.js";
 import { mValues } from "../physics/quantum.js";
 import { Rational } from "../physics/rational.js";
 import { SPEED_OF_LIGHT } from "../physics/units.js";
@@ -73,9 +73,9 @@ export function computeSpecies(species: SpeciesInput, c: ConstantsEdition): Spec
       upper,
       lower,
       k,
-      // the dipole formula has no standard meaning for a quadrupole line
+      // the dipole formula has no standard meaning for a line of rank 2 or 3
       gEff: k === 1 ? effectiveLande({ J2: upper.J2, g: upper.gJ }, { J2: lower.J2, g: lower.gJ }) : null,
-      gEffNote: k === 1 ? null : QUADRUPOLE_G_EFF_NOTE,
+      gEffNote: gEffNote(line.multipole),
       pattern: patternNotation(components, k),
       summary: patternSummary(components, k),
       components,

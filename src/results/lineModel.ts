@@ -26,11 +26,14 @@
  *    answer, linear in B).
  *  - with the term states, the reduced elements between the J of the terms
  *    are the LS ones (lsReducedElement) when both levels have the same spin
- *    and the line is not M1; otherwise the line's own J pair only
+ *    and the line is electric (E1, E2, E3: operators on the orbital
+ *    coordinates); otherwise, and for the magnetic multipoles M1 and M2,
+ *    whose spin part is not modelled, the line's own J pair only
  *    (ownPairReducedElement).
  */
 import type { Dec } from "../physics/decimal.js";
 import type { ReducedElementKind } from "../physics/field/lineAtField.js";
+import { isMagneticMultipole, type Multipole } from "../physics/linePattern.js";
 import type { LineAtFieldResult, Regime } from "./fieldTypes.js";
 
 /** A level counts as Paschen–Back from this multiple of its Paschen–Back scale on. */
@@ -81,7 +84,7 @@ export interface LineSide {
 export interface LineFacts {
   /** Upper and lower level have the same total spin S. */
   sameSpin: boolean;
-  multipole: "E1" | "M1" | "E2";
+  multipole: Multipole;
   /** Both levels have hyperfine structure (computeFields' hyperfineConstants is not null for either). */
   hyperfineBoth: boolean;
 }
@@ -105,7 +108,7 @@ export function chooseLineModel(upper: LineSide, lower: LineSide, line: LineFact
     return {
       regime,
       model: line.hyperfineBoth ? "term hyperfine–Zeeman eigenstates" : "term Zeeman eigenstates",
-      reduced: line.sameSpin && line.multipole !== "M1" ? "LS" : "own J pair",
+      reduced: line.sameSpin && !isMagneticMultipole(line.multipole) ? "LS" : "own J pair",
     };
   }
   if (line.hyperfineBoth) return { regime, model: "hyperfine–Zeeman eigenstates", reduced: "own J pair" };
@@ -124,5 +127,6 @@ export function chooseLineModel(upper: LineSide, lower: LineSide, line: LineFact
  */
 export function hadFineStructureLabels(upper: LineSide, lower: LineSide, line: LineFacts): boolean {
   const beyondLinear = (r: Regime) => r === "intermediate" || r === "Paschen–Back";
-  return (beyondLinear(upper.fs) || beyondLinear(lower.fs)) && (upper.inTerm || lower.inTerm) && line.sameSpin && line.multipole !== "M1";
+  // those builds knew E1, M1 and E2 only, so no later multipole needs the aliases
+  return (beyondLinear(upper.fs) || beyondLinear(lower.fs)) && (upper.inTerm || lower.inTerm) && line.sameSpin && (line.multipole === "E1" || line.multipole === "E2");
 }

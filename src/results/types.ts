@@ -46,11 +46,11 @@ export interface LineResult {
   lower: LevelResult;
   /** Multipole rank. */
   k: number;
-  /** Effective Landé factor; null for E2 lines (gEffNote says why). */
+  /** Effective Landé factor; null for lines of rank 2 or 3 (E2, M2, E3; gEffNote says why). */
   gEff: Dec | null;
   /** Why gEff is null, for the pages; null when it is given. */
   gEffNote: string | null;
-  /** Classical notation from exact LS g values (E2: the |Δm| = 1 and, after a semicolon, |Δm| = 2 shifts); null only for a rank other than 1 or 2. */
+  /** Classical notation from exact LS g values (rank 2 and 3: the |Δm| = 1 shifts, then after a semicolon each further |Δm|); null only for a rank below 1. */
   pattern: string | null;
   summary: string;
   components: PatternComponent[];

@@ -6,6 +6,7 @@
  */
 import { Dec, exportText } from "../physics/decimal.js";
 import { formatDoubled } from "../physics/quantum.js";
+import { isMagneticMultipole } from "../physics/linePattern.js";
 import { SPEED_OF_LIGHT } from "../physics/units.js";
 import type { ConfiguredField, FieldRow, LevelFieldResult, LineAtFieldResult, LineComponentAtField, TermFieldResult } from "../results/fieldTypes.js";
 import type { HyperfineLineGroup } from "../physics/hyperfineLines.js";
@@ -358,7 +359,9 @@ export function lineModelText(ln: LineResult, a: LineAtFieldResult, levelOf: (id
     parts.push(
       a.reduced === "LS"
         ? "Transition amplitudes between the J of the terms from LS coupling (reduced elements by Edmonds eq. 7.1.7), so the amplitudes a mixed state has on its partner J count too."
-        : `Transition amplitudes from the line's own J pair only (${ln.input.multipole === "M1" ? "an M1 line" : "a change of spin"}: LS coupling gives no reduced elements between the other J); a mixed state's amplitudes on its partner J add none.`,
+        : isMagneticMultipole(ln.input.multipole)
+          ? `Transition amplitudes from the line's own J pair only (an ${ln.input.multipole} line: the spin part of a magnetic multipole is not modelled, so no reduced elements between the other J of the terms are taken); a mixed state's amplitudes on its partner J add none.`
+          : "Transition amplitudes from the line's own J pair only (a change of spin: LS coupling gives no reduced elements between the other J); a mixed state's amplitudes on its partner J add none.",
     );
     if (a.model === "term hyperfine–Zeeman eigenstates") parts.push("Hyperfine structure is kept within each J; hyperfine matrix elements between different J are not included.");
   }

@@ -118,8 +118,9 @@ export function alignParts(list: readonly NumberParts[]): NumberParts[] {
 
 /**
  * The label of a component's polarization as shown in tables and search:
- * σ+, π, σ−, and for the |Δm| = 2 components of a quadrupole line, which
- * are neither π nor σ, "Δm = +2" or "Δm = −2" (q = m_upper − m_lower; "Δm = ±2" when q is not given).
+ * σ+, π, σ−, and for the |Δm| = 2 and 3 components of a quadrupole or
+ * octupole line, which are neither π nor σ, "Δm = +2", "Δm = −3" and so on
+ * (q = m_upper − m_lower; "Δm = ±2" when q is not given).
  */
 export function polarizationSymbol(p: "sigma+" | "pi" | "sigma-" | null, q?: number): string {
   if (p === "sigma+") return "σ+";

@@ -92,7 +92,7 @@ interface SheetLevelRow {
 export function componentList(ln: LineResult): string {
   const groups = new Map<string, Map<string, string>>();
   for (const c of ln.components) {
-    const label = c.polarization === null ? "Δm ±2" : c.polarization === "pi" ? "π" : "σ±";
+    const label = c.polarization === null ? `Δm ±${Math.abs(c.deltaM)}` : c.polarization === "pi" ? "π" : "σ±";
     const shift = c.shiftLorentzExact ? formatFraction(c.shiftLorentzExact.abs()) : formatNumber(c.shiftLorentz.abs(), 4);
     const key = `${c.polarization === "pi" || shift === "0" ? "" : "±"}${shift}`;
     const g = groups.get(label) ?? new Map<string, string>();

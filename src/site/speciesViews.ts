@@ -184,11 +184,12 @@ export interface LineFieldView extends PageCommon {
 }
 
 /** The pages of one line at one field, per polarization, when the field's page would be too large. */
-const POLARIZATION_PARTS: { key: string; text: string; test: (p: string | null) => boolean }[] = [
-  { key: "pi", text: "π components", test: (p) => p === "pi" },
-  { key: "sigma-plus", text: "σ+ components", test: (p) => p === "sigma+" },
-  { key: "sigma-minus", text: "σ− components", test: (p) => p === "sigma-" },
-  { key: "dm2", text: "Δm = ±2 components", test: (p) => p === null },
+const POLARIZATION_PARTS: { key: string; text: string; test: (c: { polarization: string | null; q: number }) => boolean }[] = [
+  { key: "pi", text: "π components", test: (c) => c.polarization === "pi" },
+  { key: "sigma-plus", text: "σ+ components", test: (c) => c.polarization === "sigma+" },
+  { key: "sigma-minus", text: "σ− components", test: (c) => c.polarization === "sigma-" },
+  { key: "dm2", text: "Δm = ±2 components", test: (c) => Math.abs(c.q) === 2 },
+  { key: "dm3", text: "Δm = ±3 components", test: (c) => Math.abs(c.q) === 3 },
 ];
 
 export interface TermView extends PageCommon {
@@ -501,7 +502,7 @@ export function lineViews(
       const whole = atFields[k]!;
       const byPolarization = whole.table !== null && splitField(ln.input.id, tesla);
       const parts = byPolarization
-        ? POLARIZATION_PARTS.map((part) => ({ part, components: a.components.filter((c) => part.test(c.polarization)) })).filter((x) => x.components.length > 0)
+        ? POLARIZATION_PARTS.map((part) => ({ part, components: a.components.filter((c) => part.test(c)) })).filter((x) => x.components.length > 0)
         : [];
       lineFields.push({
         ...common,

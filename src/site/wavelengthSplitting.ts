@@ -22,7 +22,7 @@ export const PM = "1e12";
  * the line centre (g_eff is their first moment), so the separation is
  * 2·|g_eff|·λ²·μB/(hc)·B. Linear Zeeman pattern of the J-resolved line
  * (weak field, hyperfine structure not resolved). Null without a
- * wavelength, and for E2 lines (no g_eff).
+ * wavelength, and for lines of rank 2 or 3 (E2, M2, E3: no g_eff).
  */
 export function sigmaCentroidSeparation(ln: Pick<LineResult, "gEff" | "lorentzDlambdaPerT">, tesla: Dec): Dec | null {
   if (ln.gEff === null || ln.lorentzDlambdaPerT === null) return null;

@@ -237,7 +237,7 @@ export const BAD_INPUTS: readonly BadInput[] = [
   },
   { name: "line from a level to itself", files: () => rb(edit(RB87, "    lower: 5s-S1/2\n    wavelength: \"780", "    lower: 5p-P3/2\n    wavelength: \"780")), expect: at(R, 37, 12, /line connects level "5p-P3\/2" to itself/) },
   // --- multipoles and selection rules
-  { name: "unknown multipole", files: () => rb(edit(RB87, "multipole: E1", "multipole: E3")), expect: at(R, 39, 16, /unknown multipole "E3"; .*one of E1, M1, E2/) },
+  { name: "unknown multipole", files: () => rb(edit(RB87, "multipole: E1", "multipole: E4")), expect: at(R, 39, 16, /unknown multipole "E4"; .*one of E1, M1, E2, M2, E3/) },
   {
     name: "E1 with |ΔJ| = 2",
     files: () => rb(rbWith(LEVEL_4D52, "  - id: quad\n    upper: 4d-D5/2\n    lower: 5s-S1/2\n")),
@@ -277,6 +277,21 @@ export const BAD_INPUTS: readonly BadInput[] = [
     name: "E2 between J = 1/2 and J = 1/2",
     files: () => rb(edit(RB87, `    wavelength: "794.978851156 nm"\n`, `    wavelength: "794.978851156 nm"\n    multipole: E2\n`)),
     expect: at(R, 35, 16, /line D1: E2 line J = 1\/2 → J = 1\/2 is forbidden/),
+  },
+  {
+    name: "E3 between J = 1 and J = 0",
+    files: () => sr(SR88 + "    multipole: E3\n"),
+    expect: at(S, 21, 16, /line intercombination: E3 line J = 1 → J = 0 is forbidden; E3 needs J \+ J' ≥ 3: 0 ↔ 1, 0 ↔ 2, 1 ↔ 1, 1\/2 ↔ 1\/2 and 1\/2 ↔ 3\/2 are forbidden/),
+  },
+  {
+    name: "M2 with |ΔJ| = 3",
+    files: () => rb(rbWith(LEVEL_4F72, "  - id: oct\n    upper: 4f-F7/2\n    lower: 5s-S1/2\n    multipole: M2\n")),
+    expect: at(R, 48, 16, /line oct: M2 line J = 7\/2 → J = 1\/2 changes J by 3; M2 allows \|ΔJ\| ≤ 2; .*multipole: E3 between levels of opposite parity/),
+  },
+  {
+    name: "M2 between two odd terms",
+    files: () => rb(RB87 + "  - id: fine\n    upper: 5p-P3/2\n    lower: 5p-P1/2\n    multipole: M2\n"),
+    expect: at(R, 44, 16, /line fine: M2 line between two odd terms \(2Po3\/2 and 2Po1\/2\) is forbidden by parity; M2 connects terms of opposite parity/),
   },
   {
     name: "E1 between two odd terms",

@@ -35,7 +35,7 @@ describe("species.schema.json", () => {
     ["a wavelength in MHz", edit(RB87, `"780.241209686 nm"`, `"780 MHz"`)],
     ["both gI and moment", edit(RB87, `  source: "handbook data"\nnotes`, `  moment: "+2.751818 muN"\n  source: "handbook data"\nnotes`)],
     ["a level without source", edit(SR88, `    term: 3Po0\n    source: "handbook data"\n`, "    term: 3Po0\n")],
-    ["an unknown multipole", edit(RB87, "multipole: E1", "multipole: E3")],
+    ["an unknown multipole", edit(RB87, "multipole: E1", "multipole: E4")],
     ["a malformed number", edit(RB87, `gJ: "2.00233113(20)"`, `gJ: "2.0023x"`)],
   ])("rejects %s", (_name, text) => {
     expect(validSpecies(js(text))).toBe(false);
