@@ -7,7 +7,14 @@ export function fillNumberCell(td: HTMLTableCellElement, parts: NumberParts): vo
   n.appendChild(document.createTextNode(parts.sign + parts.int));
   const fr = document.createElement("span");
   fr.className = "frac";
-  fr.textContent = parts.frac + parts.exp;
+  fr.textContent = parts.frac;
+  if (parts.unc) {
+    const unc = document.createElement("span");
+    unc.className = "unc";
+    unc.textContent = parts.unc;
+    fr.appendChild(unc);
+  }
+  if (parts.exp) fr.appendChild(document.createTextNode(parts.exp));
   n.appendChild(fr);
   if (parts.pad) {
     const pad = document.createElement("span");

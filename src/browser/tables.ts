@@ -10,6 +10,7 @@
  */
 import { plainText, shownKey } from "../site/cellText.js";
 import { compareDecimal, decimalKey, type DecimalKey } from "../site/decimalText.js";
+import { initUncertaintySwitch } from "./uncertaintySwitch.js";
 
 (globalThis as Record<string, unknown>).AtlasTables = { decimalKey, compareDecimal };
 
@@ -234,6 +235,7 @@ function init(): void {
   const tables = Array.from(document.querySelectorAll<HTMLTableElement>("table.atlas-table"));
   tables.forEach(enhance);
   addFilters(tables);
+  initUncertaintySwitch();
   document.addEventListener("click", onClick);
   window.addEventListener("hashchange", reveal);
 }

@@ -12,7 +12,7 @@
  */
 import { alignParts, type NumberParts } from "../site/plainFormat.js";
 import { fillNumberCell as fill } from "./fillNumberCell.js";
-import { convertShift, DEFAULT_SHIFT_UNIT, SHIFT_UNITS } from "../site/shiftUnits.js";
+import { convertShift, convertShiftUncertain, DEFAULT_SHIFT_UNIT, SHIFT_UNITS } from "../site/shiftUnits.js";
 import { readShiftUnit, saveShiftUnit } from "./shiftUnitChoice.js";
 
 (globalThis as Record<string, unknown>).AtlasUnits = { convert: convertShift, UNITS: SHIFT_UNITS, DEFAULT: DEFAULT_SHIFT_UNIT };
@@ -32,7 +32,9 @@ function apply(unit: string): void {
         for (const tr of Array.from(tb.rows)) {
           const td = tr.cells[col];
           const v = td?.getAttribute("data-hz-per-t");
-          const parts = v ? convertShift(v, unit) : null;
+          // a cell with an uncertainty carries it in Hz/T too; both are converted exactly and shown in the concise form
+          const u = td?.getAttribute("data-u-hz-per-t");
+          const parts = v ? (u ? convertShiftUncertain(v, u, unit) : convertShift(v, unit)) : null;
           if (td && parts) {
             tds.push(td);
             list.push(parts);

@@ -116,3 +116,63 @@ export function decimalParts(value: string, mul: string, div: string, sig: numbe
   else den *= pow10(-e);
   return fractionParts(v.neg !== m.neg !== d.neg && num !== 0n, num, den, sig);
 }
+
+/**
+ * A value and its standard uncertainty in the concise form, as shown number
+ * parts: the uncertainty rounded to two significant digits (GUM, JCGM
+ * 100:2008 §7.2.6: "at most two significant digits"; half to even like every
+ * other rounding here), the value rounded to the same last place, and the
+ * uncertainty written in units of that last digit in parentheses (GUM
+ * §7.2.2, form 2): 0.6995833012 ± 0.000000123 → 0.699 583 30(12). When the
+ * last place is left of the decimal point the value is an integer and the
+ * parentheses hold the uncertainty itself (123 456 ± 1 234 → 123 500(1200)).
+ * The ×10ⁿ form is used, with the same thresholds as fractionParts, when
+ * the larger of the value and the uncertainty has its leading digit at 10¹²
+ * or above or at 10⁻⁶ or below; its exponent is that leading digit's, so
+ * the mantissa always has a digit before the point: 3.771 074 633 8(12)×10¹⁴.
+ * ±num/den is the value, uNum/uDen (> 0) the uncertainty.
+ */
+export function conciseFractionParts(neg: boolean, num: bigint, den: bigint, uNum: bigint, uDen: bigint): NumberParts {
+  const ur = roundSignificant(uNum, uDen, 2);
+  const p = ur.e - (ur.d.length - 1); // the power of ten of the uncertainty's last digit
+  // the value rounded to 10^p, half to even: q·10^p
+  const n2 = p <= 0 ? num * pow10(-p) : num;
+  const d2 = p <= 0 ? den : den * pow10(p);
+  let q = n2 / d2;
+  const r = n2 % d2;
+  if (2n * r > d2 || (2n * r === d2 && q % 2n === 1n)) q += 1n;
+  const sign = neg && q !== 0n ? MINUS : "";
+  const qs = q.toString();
+  const lead = Math.max(q === 0n ? ur.e : qs.length - 1 + p, ur.e);
+  if (lead >= 12 || lead <= -6) {
+    const s = qs.padStart(lead - p + 1, "0");
+    return { sign, int: s.charAt(0), frac: "." + groupDigits(s.slice(1), true), unc: `(${ur.d})`, exp: timesTenTo(lead) };
+  }
+  if (p >= 0) {
+    return { sign, int: groupDigits((q * pow10(p)).toString(), false), frac: "", unc: `(${(BigInt(ur.d) * pow10(p)).toString()})`, exp: "" };
+  }
+  const s = qs.padStart(-p + 1, "0");
+  return { sign, int: groupDigits(s.slice(0, s.length + p), false), frac: "." + groupDigits(s.slice(s.length + p), true), unc: `(${ur.d})`, exp: "" };
+}
+
+/**
+ * value × mul / div with its uncertainty u × mul / div (all decimal texts,
+ * u > 0, div non-zero) in the concise form of conciseFractionParts, exactly.
+ * The unit switch uses it to show a shift and its uncertainty in the
+ * reader's unit; format.ts's uncertainParts is this with mul = div = 1.
+ * Null when a text is not a decimal, or u is zero or negative.
+ */
+export function uncertainDecimalParts(value: string, u: string, mul: string, div: string): NumberParts | null {
+  const v = parseDecimal(value);
+  const w = parseDecimal(u);
+  const m = parseDecimal(mul);
+  const d = parseDecimal(div);
+  if (!v || !w || !m || !d || d.n === 0n || w.n === 0n || w.neg) return null;
+  const scale = (x: ExactDecimal): [bigint, bigint] => {
+    const e = x.e + m.e - d.e;
+    return e >= 0 ? [x.n * m.n * pow10(e), d.n] : [x.n * m.n, d.n * pow10(-e)];
+  };
+  const [num, den] = scale(v);
+  const [uNum, uDen] = scale(w);
+  return conciseFractionParts(v.neg !== m.neg !== d.neg && num !== 0n, num, den, uNum, uDen);
+}

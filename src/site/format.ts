@@ -7,6 +7,7 @@
 import { Dec } from "../physics/decimal.js";
 import type { Rational } from "../physics/rational.js";
 import { groupDigits, MINUS, SUPERSCRIPT, type NumberParts } from "./plainFormat.js";
+import { uncertainDecimalParts } from "./decimalText.js";
 
 // The rules that need no decimal arithmetic live in plainFormat.ts, shared with the page scripts.
 export { FIGURE_SPACE, MINUS, THIN_SPACE, formatM, formatQuantum, groupDigits, partsText, polarizationSymbol, termText, transitionKindLabel, type NumberParts } from "./plainFormat.js";
@@ -32,6 +33,25 @@ export function numberParts(x: Dec, sig = 9): NumberParts {
   const text = a.toFixed(Math.max(0, sig - 1 - e));
   const [i, f] = text.split(".");
   return { sign, int: group(i!, false), frac: f ? "." + group(f, true) : "", exp: "" };
+}
+
+/**
+ * A computed value with its standard uncertainty in the concise form, as
+ * parts (conciseFractionParts in decimalText.ts: the uncertainty to two
+ * significant digits, GUM §7.2.6; the value to the same last place):
+ * 0.6995833012 with u = 0.000000123 → { int: "0", frac: ".699 583 30", unc: "(12)" }.
+ * With u null or zero (an exact value) it is numberParts(x, sig).
+ */
+export function uncertainParts(x: Dec, u: Dec | null, sig = 9): NumberParts {
+  if (u === null || u.isZero()) return numberParts(x, sig);
+  return uncertainDecimalParts(x.toString(), u.abs().toString(), "1", "1")!;
+}
+
+/** One string of a value with its uncertainty: "0.699 583 30(12)"; formatNumber(x, sig) when u is null. */
+export function formatUncertain(x: Dec | null, u: Dec | null, sig = 9): string {
+  if (x === null) return "—";
+  const p = uncertainParts(x, u, sig);
+  return p.sign + p.int + p.frac + (p.unc ?? "") + p.exp;
 }
 
 /** One string: sign, digits, fraction, exponent. */

@@ -9,7 +9,7 @@
  * switch and by the finder's result lines.
  */
 import { UNITS } from "../physics/unitTable.js";
-import { decimalParts } from "./decimalText.js";
+import { decimalParts, uncertainDecimalParts } from "./decimalText.js";
 import type { NumberParts } from "./plainFormat.js";
 
 export const SHIFT_UNITS = ["Hz/T", "kHz/T", "MHz/T", "GHz/T", "cm⁻¹/T", "Hz/G", "kHz/G", "MHz/G", "GHz/G", "cm⁻¹/G"] as const;
@@ -23,13 +23,23 @@ function factor(unit: string, kind: "frequency" | "field"): string | null {
   return u && u.kind === kind ? u.factor : null;
 }
 
-/** A shift in Hz/T (decimal text) in `unit`, or null when either cannot be read. */
-export function convertShift(hzPerT: string, unit: string): NumberParts | null {
+function factors(unit: string): { field: string; freq: string } | null {
   if (!(SHIFT_UNITS as readonly string[]).includes(unit)) return null;
   const slash = unit.lastIndexOf("/");
   const freq = factor(unit.slice(0, slash), "frequency");
   const field = factor(unit.slice(slash + 1), "field");
-  if (freq === null || field === null) return null;
+  return freq === null || field === null ? null : { field, freq };
+}
+
+/** A shift in Hz/T (decimal text) in `unit`, or null when either cannot be read. */
+export function convertShift(hzPerT: string, unit: string): NumberParts | null {
+  const f = factors(unit);
   // (Hz/T) × (T per field unit) / (Hz per frequency unit)
-  return decimalParts(hzPerT, field, freq, SHIFT_DIGITS);
+  return f && decimalParts(hzPerT, f.field, f.freq, SHIFT_DIGITS);
+}
+
+/** A shift and its standard uncertainty, both in Hz/T, in `unit` in the concise form ("1.399 624 491 71(44)"); null when either cannot be read. */
+export function convertShiftUncertain(hzPerT: string, uHzPerT: string, unit: string): NumberParts | null {
+  const f = factors(unit);
+  return f && uncertainDecimalParts(hzPerT, uHzPerT, f.field, f.freq);
 }

@@ -7,7 +7,7 @@ import type { Dec } from "../physics/decimal.js";
 import { exportText } from "../physics/decimal.js";
 import type { Rational } from "../physics/rational.js";
 import type { Measured } from "../data/model.js";
-import { formatFraction, formatM, formatQuantum, numberParts, partsText, writtenParts } from "./format.js";
+import { formatFraction, formatM, formatQuantum, numberParts, partsText, uncertainParts, writtenParts } from "./format.js";
 import { alignParts, type NumberParts } from "./plainFormat.js";
 
 export { PUNCTUATION_SPACE } from "./plainFormat.js";
@@ -41,6 +41,10 @@ export interface Cell {
   parts?: NumberParts;
   /** Exact Hz/T value for unit switching. */
   hzPerT?: string;
+  /** Standard uncertainty of the value in Hz/T, converted with it by the unit switch (data-u-hz-per-t). */
+  uHzPerT?: string;
+  /** Standard uncertainty of a computed number in the column's unit (export text), for the CSV's "u" column; absent when exact. */
+  u?: string;
   /** Exact absolute frequency (Hz) of the row, from which the page script recomputes an offset (the lock-point tables' data-hz). */
   hz?: string;
   /** Exact fraction as data ("-4/3", ASCII minus), e.g. for the CSV. */
@@ -78,6 +82,23 @@ export function numberCell(x: Dec | null, sig = 9, extra: Partial<Cell> = {}): C
   if (x === null) return { text: "—", sort: "", ...extra };
   const parts = numberParts(x, sig);
   return { text: partsText(parts), sort: exportText(x, 30), parts, ...extra };
+}
+
+/**
+ * A computed number with its standard uncertainty in the concise form
+ * (uncertainParts in format.ts): "0.699 583 30(12)", the "(12)" kept in
+ * parts.unc so the page can hide it. With u null (exact, or no uncertain
+ * input) it is exactly numberCell(x, sig, extra). A cell with hzPerT in
+ * `extra` (a switchable shift column) must be given `uHzPerT`, the
+ * uncertainty in Hz/T, which the unit switch converts with the value.
+ */
+export function uncertainCell(x: Dec | null, u: Dec | null, sig = 9, extra: Partial<Cell> = {}, uHzPerT?: Dec): Cell {
+  if (x === null || u === null || u.isZero()) return numberCell(x, sig, extra);
+  const parts = uncertainParts(x, u, sig);
+  const uText = exportText(u.abs(), 30);
+  if (extra.hzPerT !== undefined && uHzPerT === undefined) throw new Error("uncertainCell: a cell with hzPerT needs its uncertainty in Hz/T too");
+  const switchU = uHzPerT === undefined ? {} : { uHzPerT: exportText(uHzPerT.abs(), 30) };
+  return { text: partsText(parts), sort: exportText(x, 30), parts, u: uText, ...switchU, ...extra };
 }
 
 /**

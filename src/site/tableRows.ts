@@ -19,7 +19,7 @@ export function escapeHtml(s: string): string {
 const e = (s: string | undefined): string => (s ? escapeHtml(s) : "");
 
 export function termHtml(t: TermParts): string {
-  return `<span class="term"><sup>${e(t.multiplicity)}</sup>${e(t.letter)}${t.parity ? "<sup>o</sup>" : ""}<sub>${e(t.J)}</sub></span>`;
+  return `<span class="term">${t.multiplicity ? `<sup>${e(t.multiplicity)}</sup>` : ""}${e(t.letter)}${t.parity ? "<sup>o</sup>" : ""}<sub>${e(t.J)}</sub></span>`;
 }
 
 /** The content of one cell: a term symbol, an in-site link, a number split for alignment, a folded note, or text. */
@@ -31,7 +31,9 @@ export function cellHtml(c: Cell, col: Column): string {
     const p = c.parts;
     const fraction = c.fraction ? `<span class="q">${e(c.fraction.text)}</span> ${e(c.fraction.rel)} ` : "";
     const pad = p.pad ? `<span class="pad">${e(p.pad)}</span>` : "";
-    return `${fraction}<span class="n">${e(p.sign)}${e(p.int)}<span class="frac">${e(p.frac)}${e(p.unc)}${e(p.exp)}</span>${pad}</span>`;
+    // the uncertainty is its own element, so the page's switch can hide it (src/browser/uncertaintySwitch.ts)
+    const unc = p.unc ? `<span class="unc">${e(p.unc)}</span>` : "";
+    return `${fraction}<span class="n">${e(p.sign)}${e(p.int)}<span class="frac">${e(p.frac)}${unc}${e(p.exp)}</span>${pad}</span>`;
   }
   return e(c.text);
 }
@@ -46,7 +48,7 @@ export function tableRowsHtml(t: Table): string {
       const col = t.columns[i];
       if (!col) return;
       const key = sortKey(c, col.kind);
-      row += `<td class="k-${e(col.kind)}"${key === false ? "" : ` data-sort="${e(key)}"`}${c.hzPerT ? ` data-hz-per-t="${e(c.hzPerT)}"` : ""}${c.hz ? ` data-hz="${e(c.hz)}"` : ""}>${cellHtml(c, col)}</td>`;
+      row += `<td class="k-${e(col.kind)}"${key === false ? "" : ` data-sort="${e(key)}"`}${c.hzPerT ? ` data-hz-per-t="${e(c.hzPerT)}"` : ""}${c.uHzPerT ? ` data-u-hz-per-t="${e(c.uHzPerT)}"` : ""}${c.hz ? ` data-hz="${e(c.hz)}"` : ""}>${cellHtml(c, col)}</td>`;
     });
     // an alias (an anchor of an earlier build that names this row) is an empty element inside it, so old links land here
     const aliases = (r.aliases ?? []).map((a) => `<span id="${e(a)}"></span>`).join("");
