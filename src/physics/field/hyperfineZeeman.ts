@@ -190,6 +190,22 @@ function blockStructures(I2: number, J2: number): BlockStructure[] {
 }
 
 /**
+ * The operators of one M block of a level (I, J) in the uncoupled basis
+ * |mJ mI⟩, ascending mJ: I·J, the quadrupole operator without its constant
+ * B (null when I < 1 or J < 1), and the diagonals mJ and mI. They are the
+ * derivatives of the block matrix with respect to A, B, and (per unit
+ * (μB/h)·B) gJ and gI, which is what the Hellmann–Feynman sensitivities of
+ * field/sensitivity.ts need. Exact like blockMatrix (Dec square roots of
+ * rationals). Worked example: 87Rb 5²S1/2, M = 2: I·J = [[3/4]], mJ = [1/2],
+ * mI = [3/2], quadrupole null.
+ */
+export function blockOperators(I2: number, J2: number, M2: number): { basis: UncoupledState[]; dipole: Dec[][]; quadrupole: Dec[][] | null; mJ: Dec[]; mI: Dec[] } {
+  const b = blockStructures(I2, J2).find((x) => x.M2 === M2);
+  if (!b) throw new RangeError(`no block M = ${M2}/2 for I = ${I2}/2, J = ${J2}/2`);
+  return b;
+}
+
+/**
  * Field-independent data of one M block, in Dec and in float64 (the float
  * copy feeds the float twin, hyperfineZeemanFloat.ts, and seeds the Dec
  * eigen-solver). Shared by the field modules; not a result.
