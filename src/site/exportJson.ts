@@ -13,6 +13,7 @@ import type { ConfiguredField, LevelFieldResult, LineFieldResult } from "../resu
 import { absoluteFrequency, lockPoints, vacuumWavelength } from "../physics/lockPoints.js";
 import { SPEED_OF_LIGHT } from "../physics/units.js";
 import { PM, sigmaCentroidSeparation } from "./wavelengthSplitting.js";
+import { angularCoefficientTexts, lineSecondOrder, viewFactors } from "../results/observation.js";
 
 export const EXPORT_DIGITS = 30;
 export const EXPORT_FORMAT = "sublevel-atlas/export@1";
@@ -25,6 +26,17 @@ export interface ExportContext {
 }
 
 const fieldText = (t: Dec) => exportText(t, EXPORT_DIGITS);
+
+/** `G` and `G_exact` of a line (null above rank 1). */
+function secondOrderExport(s: ReturnType<typeof lineSecondOrder>) {
+  return { G: num(s.G), G_exact: s.GExact === null ? null : s.GExact.toString() };
+}
+
+/** A component's angular factors seen along (θ = 0) and across (θ = 90°) the field, exact fractions. */
+function viewExport(k: number, q: number) {
+  const v = viewFactors(k, q);
+  return { angular_0deg: v.along.toString(), angular_90deg: v.across.toString() };
+}
 
 /** `field_table` and the other field-dependent keys of one level. */
 function levelFieldExport(f: LevelFieldResult, fields: ConfiguredField[]) {
@@ -172,6 +184,8 @@ export function speciesExport(s: SpeciesResult, ctx: ExportContext, fields?: { r
       air_wavelength_m: ln.input.airWavelength ? num(ln.input.airWavelength.si) : null,
       frequency_Hz: num(ln.frequencyHz),
       g_eff: num(ln.gEff),
+      ...secondOrderExport(lineSecondOrder(ln)),
+      angular_coefficients: angularCoefficientTexts(ln),
       pattern: ln.pattern,
       summary: ln.summary,
       components: ln.components.map((c) => ({
@@ -183,6 +197,7 @@ export function speciesExport(s: SpeciesResult, ctx: ExportContext, fields?: { r
         shift_lorentz_exact: c.shiftLorentzExact.toString(),
         shift_Hz_per_T: num(c.shiftHzPerT),
         strength: c.strength.toString(),
+        ...viewExport(ln.k, c.deltaM),
       })),
       lorentz_dlambda_pm_per_T: ln.lorentzDlambdaPerT ? num(ln.lorentzDlambdaPerT.mul(PM)) : null,
       sigma_separation_at_fields: (fields?.configured ?? []).map((b) => {

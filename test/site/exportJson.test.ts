@@ -147,3 +147,33 @@ describe("the species export", () => {
     expect(Number(t.field_insensitive[0].B_T) * 1e4).toBeCloseTo(3.23, 2);
   });
 });
+
+describe("what the observer sees, in the export", () => {
+  it("gives G from the measured g values and G_exact from the LS ones", () => {
+    const d2 = exportOf("rb87").lines[0];
+    // G = ḡ² − (gu − gl)²(16s − 7d² − 4)/80 (Landi Degl'Innocenti and Landolfi 2004, from memory)
+    // worked by hand with gu = 1.3362, gl = 2.002331130000000000000000001 (python fractions): 1.340388232046999…
+    expect(d2.G.startsWith("1.34038823204699999999999999")).toBe(true);
+    // by hand from the D2 components (as Na D2): 13/9 − 1/9
+    expect(d2.G_exact).toBe("4/3");
+  });
+
+  it("gives each component its exact angular factors along and across the field", () => {
+    const d2 = exportOf("rb87").lines[0];
+    // textbook: π sin²θ, σ (1 + cos²θ)/2
+    for (const c of d2.components as { delta_m: number; angular_0deg: string; angular_90deg: string }[]) {
+      expect([c.angular_0deg, c.angular_90deg]).toEqual(c.delta_m === 0 ? ["0", "1"] : ["1", "1/2"]);
+    }
+    expect(d2.angular_coefficients).toEqual({ "0": ["1", "-1"], "1": ["1/2", "1/2"] });
+  });
+
+  it("gives a quadrupole line null G and G_exact and its rank-2 angular factors", () => {
+    const e2 = exportOf("ca40-ion").lines[0];
+    expect(e2.G).toBeNull();
+    expect(e2.G_exact).toBeNull();
+    // textbook E2: q = 0 3 sin²θ cos²θ, |q| = 1 (cos²θ + cos²2θ)/2, |q| = 2 (1 − cos⁴θ)/2
+    expect(e2.angular_coefficients).toEqual({ "0": ["0", "3", "-3"], "1": ["1/2", "-3/2", "2"], "2": ["1/2", "0", "-1/2"] });
+    const q2 = e2.components.find((c: { delta_m: number }) => c.delta_m === 2);
+    expect([q2.angular_0deg, q2.angular_90deg]).toEqual(["0", "1/2"]);
+  });
+});
