@@ -69,6 +69,8 @@ export interface HyperfineGroupStrength {
  * Worked example (87Rb D2, I = 3/2, J_u = 3/2, J_l = 1/2, E1): from F = 2 the
  * shares to F′ = 3, 2, 1 are 7/10, 1/4, 1/20; from F = 1 to F′ = 2, 1, 0 they
  * are 5/12, 5/12, 1/6 (Steck); the group F = 2 → F′ = 3 is 7/16 of the line.
+ * Rank 3 (171Yb⁺ 467 nm, E3, I = 1/2, ²S1/2 → ²F°7/2): the clock group
+ * F = 0 → F′ = 3 is 1/4 of the line, 1/28 in each of its seven components.
  */
 export function hyperfineGroupStrengths(I2: number, Ju2: number, Jl2: number, k: number): HyperfineGroupStrength[] {
   const raw: { Fu2: number; Fl2: number; s: Rational }[] = [];
@@ -124,7 +126,7 @@ export interface HyperfineLineInput {
   gI: Dec;
   upper: HyperfineLineLevel;
   lower: HyperfineLineLevel;
-  /** Multipole rank: 1 (E1, M1) or 2 (E2). */
+  /** Multipole rank: 1 (E1, M1), 2 (E2, M2) or 3 (E3). */
   k: number;
   /** μB/h, Hz/T, from the constants edition. */
   muB_h: Dec;

@@ -1,3 +1,4 @@
+import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { Dec, dec } from "../../src/physics/decimal.js";
 import { Rational } from "../../src/physics/rational.js";
@@ -97,5 +98,54 @@ describe("hyperfineLinePattern", () => {
     const g = pattern.find((x) => x.Fl2 === 2 && x.Fu2 === 0)!;
     expect(g.gFu).toBeNull();
     for (const c of g.components) expect(c.shiftLorentz.add(g.gFl!.mul(c.mFl2).div(2)).abs().lt("1e-40")).toBe(true);
+  });
+});
+
+// Source: sympy 1.14 sympy.physics.wigner (exact), written by scripts/fixtures/wigner_sympy.py.
+interface HyperfineLineCase {
+  name: string;
+  k: number;
+  Ju2: number;
+  Jl2: number;
+  I2: number | null;
+  groups?: [number, number, string][];
+  hyperfineComponents?: [number, number, number, number, string][];
+}
+const HF_CASES = (JSON.parse(readFileSync(new URL("../fixtures/wigner-sympy.json", import.meta.url), "utf-8")) as { multipoleLines: HyperfineLineCase[] }).multipoleLines.filter(
+  (c) => c.I2 !== null,
+);
+
+describe("hyperfineGroupStrengths of rank 2 and 3 (M2, E3)", () => {
+  it("gives every group and component of each fixture line the strength sympy gives, and no other", () => {
+    expect(HF_CASES.map((c) => c.k)).toEqual(expect.arrayContaining([2, 3]));
+    for (const c of HF_CASES) {
+      const gs = hyperfineGroupStrengths(c.I2!, c.Ju2, c.Jl2, c.k);
+      const groups = gs.map((g) => [g.Fu2, g.Fl2, g.strength.toString()]).sort((a, b) => Number(a[1]) - Number(b[1]) || Number(a[0]) - Number(b[0]));
+      const wantGroups = [...c.groups!].sort((a, b) => a[1] - b[1] || a[0] - b[0]);
+      expect(groups, c.name).toEqual(wantGroups); // sympy
+      const comps = gs.flatMap((g) => g.components.map((x) => [g.Fu2, g.Fl2, x.mFu2, x.mFl2, x.strength.toString()]));
+      const key = (r: (string | number)[]) => r.slice(0, 4).join(",");
+      expect(new Map(comps.map((r) => [key(r), r[4]])), c.name).toEqual(new Map(c.hyperfineComponents!.map((r) => [key(r), r[4]]))); // sympy
+    }
+  });
+
+  it("makes each M2 and E3 line sum to exactly 1 and each group's components to the group", () => {
+    // 6j and 3j orthogonality (Edmonds 1957 eqs. 3.7.8, 6.2.9)
+    for (const [I2, Ju2, Jl2, k] of [[9, 4, 0, 2], [1, 7, 1, 3], [3, 7, 1, 3], [5, 5, 3, 3], [2, 8, 4, 3]] as const) {
+      const gs = hyperfineGroupStrengths(I2, Ju2, Jl2, k);
+      expect(sum(gs.map((g) => g.strength)).equals(Rational.ONE)).toBe(true);
+      for (const g of gs) expect(sum(g.components.map((x) => x.strength)).equals(g.strength)).toBe(true);
+      expect(gs.flatMap((g) => g.components).some((x) => x.cycling)).toBe(false); // cycling is a rank-1 statement
+    }
+  });
+
+  it("gives the 171Yb+ 467 nm E3 clock group F = 0 → F′ = 3 a quarter of the line, all in the Δm = 0 component among Δm = 0, ±1, ±2, ±3", () => {
+    // I = 1/2, 2S1/2 F = 0 → 2F7/2 F′ = 3: (2F′+1)(2F+1){7/2 3 1/2; 0 1/2 3}²/(2I+1) = 7·1·(1/14)/2 = 1/4 (sympy, fixture above);
+    // from mF = 0 each of the 7 components (3 3 0; −q q 0)² = 1/7 (Edmonds eq. 3.7.9)
+    const gs = hyperfineGroupStrengths(1, 7, 1, 3);
+    const clock = gs.find((g) => g.Fu2 === 6 && g.Fl2 === 0)!;
+    expect(clock.strength.toString()).toBe("1/4");
+    expect(clock.components.map((x) => [x.q, x.strength.toString()])).toEqual([-3, -2, -1, 0, 1, 2, 3].map((qq) => [qq, "1/28"]));
+    expect(clock.shareOfLower.toString()).toBe("1"); // F = 0 reaches only F′ = 3 by rank 3 (triangle rule)
   });
 });

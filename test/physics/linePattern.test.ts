@@ -1,9 +1,13 @@
+import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { Dec } from "../../src/physics/decimal.js";
 import { landeExact } from "../../src/physics/lande.js";
 import {
   effectiveLande,
+  gEffNote,
   lineComponents,
+  multipoleChangesParity,
+  multipoleName,
   multipoleRank,
   patternNotation,
   patternSummary,
@@ -141,5 +145,94 @@ describe("effectiveLande", () => {
     // del Toro Iniesta (2003), eq. 3.44 applied to 2P → 2S1/2 (worked by hand).
     expect(effectiveLande(P1_2, S1_2).toSignificantDigits(30).eq(new Dec(4).div(3).toSignificantDigits(30))).toBe(true);
     expect(effectiveLande(P3_2, S1_2).toSignificantDigits(30).eq(new Dec(7).div(6).toSignificantDigits(30))).toBe(true);
+  });
+});
+
+// Source: sympy 1.14 sympy.physics.wigner (exact), written by scripts/fixtures/wigner_sympy.py.
+interface MultipoleLineCase {
+  name: string;
+  k: number;
+  Ju2: number;
+  Jl2: number;
+  I2: number | null;
+  components: [number, number, string][];
+}
+const MULTIPOLE_LINES = (JSON.parse(readFileSync(new URL("../fixtures/wigner-sympy.json", import.meta.url), "utf-8")) as { multipoleLines: MultipoleLineCase[] }).multipoleLines;
+
+describe("lineComponents of rank 2 and 3 (M2, E3)", () => {
+  it("gives every component of each fixture line the strength sympy gives, and no other component", () => {
+    expect(MULTIPOLE_LINES.filter((c) => c.k === 3).length).toBeGreaterThanOrEqual(3);
+    for (const c of MULTIPOLE_LINES) {
+      const level = (J2: number): PatternLevel => ({ J2, g: null, gExact: null });
+      const cs = lineComponents(level(c.Ju2), level(c.Jl2), c.k, MUB_H);
+      const got = cs.map((x) => [x.mu2, x.ml2, x.strength.toString()]).sort((a, b) => Number(a[0]) - Number(b[0]) || Number(a[1]) - Number(b[1]));
+      expect(got, c.name).toEqual(c.components); // sympy
+    }
+  });
+
+  it("makes the strengths of every M2 and E3 line sum to exactly 1", () => {
+    // Σ over m of (Ju k Jl; −mu q ml)² = 1 (orthogonality of 3j symbols, Edmonds 1957 eq. 3.7.8)
+    for (const [Ju2, Jl2, k] of [[4, 0, 2], [6, 4, 2], [7, 1, 3], [5, 3, 3], [8, 4, 3], [9, 3, 3]] as const) {
+      const cs = lineComponents({ J2: Ju2, g: null, gExact: null }, { J2: Jl2, g: null, gExact: null }, k, MUB_H);
+      expect(cs.reduce((a, x) => a.add(x.strength), Rational.ZERO).equals(Rational.ONE), `${Ju2}/2 → ${Jl2}/2, k = ${k}`).toBe(true);
+      expect(Math.max(...cs.map((x) => Math.abs(x.deltaM)))).toBe(k);
+    }
+  });
+
+  it("gives the Sr 1S0 → 3P2 M2 line five equal components, shifted by 0, ±3/2, ±3 Lorentz units", () => {
+    // J = 2 → 0: (2 2 0; −m m 0)² = 1/5 for every m (3j with a zero, Edmonds eq. 3.7.9); g(3P2) = 3/2 (LS, common practice)
+    const cs = lineComponents(lsLevel(2, 1, 4), { J2: 0, g: null, gExact: null }, 2, MUB_H);
+    expect(cs.map((c) => [c.deltaM, c.strength.toString(), c.shiftLorentzExact.toString()])).toEqual([
+      [-2, "1/5", "-3"],
+      [-1, "1/5", "-3/2"],
+      [0, "1/5", "0"],
+      [1, "1/5", "3/2"],
+      [2, "1/5", "3"],
+    ]);
+    expect(cs.map((c) => c.polarization)).toEqual([null, "sigma-", "pi", "sigma+", null]);
+    expect(patternNotation(cs, 2)).toBe("(0) 3; 6 / 2"); // by hand: 0, 3/2, 3 over d = 2
+    expect(patternSummary(cs, 2)).toBe("quadrupole quintuplet, spacing 3/2 Lorentz units");
+  });
+
+  it("repeats the 171Yb+ 467 nm E3 worked example: 14 components, pattern (3) 5, 11; 13, 19; 21, 27 / 7", () => {
+    // 2F7/2 → 2S1/2 with LS g = 8/7 and 2 (common practice); shifts (8/7)mu − 2ml worked by hand:
+    // Δm = 0: ±3/7; ±1: 5/7, 11/7; ±2: 13/7, 19/7; ±3: 21/7, 27/7
+    const F7_2 = lsLevel(1, 3, 7);
+    expect(F7_2.gExact!.toString()).toBe("8/7"); // LS g of 2F7/2 (textbook formula, by hand)
+    const cs = lineComponents(F7_2, S1_2, 3, MUB_H);
+    expect(cs).toHaveLength(14);
+    expect(patternNotation(cs, 3)).toBe("(3) 5, 11; 13, 19; 21, 27 / 7");
+    expect(patternSummary(cs, 3)).toBe("octupole pattern: 2 components with Δm = 0, 4 with Δm = ±1, 4 with Δm = ±2, 4 with Δm = ±3, spread over ±27/7 Lorentz units");
+    // the stretched component mu = 7/2 → ml = 1/2 (Δm = 3): (7/2 3 1/2; −7/2 3 1/2)² = 1/8 (sympy, fixture above)
+    expect(strengthOf(cs, 7, 1)).toBe("1/8");
+  });
+
+  it("calls an octupole line with g = 1 on one level and J = 0 on the other a normal septuplet", () => {
+    // J = 3 → 0 with g = 1: Δm = 0, ±1, ±2, ±3 at 0, ±1, ±2, ±3 Lorentz units (by hand)
+    const one: PatternLevel = { J2: 6, g: new Dec(1), gExact: Rational.ONE };
+    const cs = lineComponents(one, { J2: 0, g: null, gExact: null }, 3, MUB_H);
+    expect(patternSummary(cs, 3)).toBe("normal octupole septuplet");
+    expect(patternNotation(cs, 3)).toBe("(0) 1; 2; 3 / 1");
+  });
+});
+
+describe("multipoles", () => {
+  it("give ranks 1, 1, 2, 2, 3 to E1, M1, E2, M2, E3", () => {
+    // the digit of the name is the rank (common practice)
+    expect((["E1", "M1", "E2", "M2", "E3"] as const).map(multipoleRank)).toEqual([1, 1, 2, 2, 3]);
+  });
+
+  it("change parity for E1, M2 and E3 and keep it for M1 and E2", () => {
+    // Ek has parity (−1)^k, Mk (−1)^(k+1) (Sobelman 1979, §9.1; common practice)
+    expect((["E1", "M1", "E2", "M2", "E3"] as const).map(multipoleChangesParity)).toEqual([true, false, false, true, true]);
+    expect(multipoleName("M2")).toBe("magnetic quadrupole");
+    expect(multipoleName("E3")).toBe("electric octupole");
+  });
+
+  it("leave g_eff undefined for rank 2 and 3 with the reason, and defined for dipoles", () => {
+    expect(gEffNote("E1")).toBeNull();
+    expect(gEffNote("M1")).toBeNull();
+    expect(gEffNote("M2")).toBe("not defined for a magnetic-quadrupole (M2) line: g_eff is the first moment of the σ components of a dipole line, and an M2 line also has Δm = ±2 components");
+    expect(gEffNote("E3")).toMatch(/^not defined for an electric-octupole \(E3\) line: .* also has Δm = ±2 and ±3 components$/);
   });
 });

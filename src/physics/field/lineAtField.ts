@@ -18,9 +18,9 @@
  * Edmonds eq. (7.1.7):
  *   ⟨(LS)J‖T^k(L)‖(L'S)J'⟩ = (−1)^(L+S+J'+k) √((2J+1)(2J'+1)) {L J S; J' L' k} ⟨L‖T^k‖L'⟩;
  * ⟨L‖T^k‖L'⟩ is common to the whole multiplet and drops out of the relative
- * strengths. This holds for E1 and E2 (operators on orbital coordinates); for
- * M1 the spin part of the operator is not covered (the caller gives its own
- * reduced elements then).
+ * strengths. This holds for the electric multipoles E1, E2 and E3 (operators
+ * on orbital coordinates); for the magnetic ones (M1, M2) the spin part of
+ * the operator is not covered (the caller gives its own reduced elements then).
  */
 import { Dec, ONE, ZERO } from "../decimal.js";
 import { Rational } from "../rational.js";
