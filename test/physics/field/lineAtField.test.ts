@@ -145,6 +145,37 @@ describe("statesFromHyperfine", () => {
   });
 });
 
+describe("lineComponentsAtField for an octupole (E3) line", () => {
+  // Input only (values near those of 171Yb+, 4f13 6s2 2F°7/2 → 6s 2S1/2 at 467 nm): I = 1/2, gI from μ = +0.4937 μN.
+  const gI = dec("-0.0005377");
+  const ground = { J2: 1, I2: 1, gJ: dec("2.0026"), gI, A: dec("12642812118.466"), B: dec("0"), muB_h };
+  const upper = { J2: 7, I2: 1, gJ: dec("1.145"), gI, A: dec("-3.6e9"), B: dec("0"), muB_h };
+  const at = (B: string) => {
+    const up = solveHyperfineZeeman(upper, dec(B));
+    const low = solveHyperfineZeeman(ground, dec(B));
+    return { up, low, comps: lineComponentsAtField(statesFromHyperfine(7, up), statesFromHyperfine(1, low), 3) };
+  };
+
+  it("gives each Δm = q of −3 … 3 one seventh of the strength at every field", () => {
+    for (const B of ["1e-9", "0.01", "1"]) {
+      const { comps } = at(B);
+      expect(new Set(comps.map((c) => c.q))).toEqual(new Set([-3, -2, -1, 0, 1, 2, 3]));
+      close(comps.reduce((s, c) => s.add(c.strength), new Dec(0)), dec("1"), "1e-45");
+      for (let q = -3; q <= 3; q++) {
+        // Σ_ul |⟨u|T_q|l⟩|² is a trace, the same in every basis: 1/(2k+1) of the total (common practice)
+        close(comps.filter((c) => c.q === q).reduce((s, c) => s.add(c.strength), new Dec(0)), dec("1").div(7), "1e-45");
+      }
+    }
+  });
+
+  it("gives the clock component F = 0, mF = 0 → F′ = 3, mF′ = 0 1/28 of the line at a vanishing field, as the weak-field pattern", () => {
+    // 1/4 (group F = 0 → F′ = 3) × 1/7 (its Δm = 0 share): sympy fixture, test/physics/hyperfineLines.test.ts
+    const { up, low, comps } = at("1e-9");
+    const clock = comps.find((c) => low[c.lower]!.F2 === 0 && up[c.upper]!.F2 === 6 && up[c.upper]!.mF2 === 0)!;
+    close(clock.strength, dec("1").div(28), "1e-12");
+  });
+});
+
 describe("lines from term states (statesFromTerm, sublevelLabel, lineReducedElement, ownPairReducedElement)", () => {
   // 6Li 2P: I = 1, gI = −0.0004476540, 2P1/2 at 446.789634 THz (A = 17.386 MHz), 2P3/2 at 446.799677 THz
   // (A = −1.155 MHz, B = −0.10 MHz): M. E. Gehm, "Properties of 6Li", from memory (as scripts/fixtures/term_zeeman.py)
