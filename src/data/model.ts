@@ -30,7 +30,9 @@ export interface Quantity extends Measured {
   siUncertainty: Dec | null;
 }
 
-export interface TermSymbol {
+/** An LS term symbol, e.g. "2Po3/2". */
+export interface LSTerm {
+  scheme: "LS";
   /** As written, e.g. "2Po3/2". */
   text: string;
   /** 2S+1 */
@@ -45,6 +47,49 @@ export interface TermSymbol {
   J2: number;
   /** "odd" when the term carries a parity mark (o or °), else null (unmarked). */
   parity: "odd" | null;
+}
+
+/**
+ * A jK (pair-coupled) level, written (2s+1)[K]J, e.g. "2[3/2]o2": the core's
+ * parent term (its j1), the outer electron's l, K = j1 + l, J = K + s.
+ */
+export interface JKTerm {
+  scheme: "jK";
+  /** As written, e.g. "2[3/2]o2". */
+  text: string;
+  /** 2s+1 of the outer electron (always 2). */
+  multiplicity: number;
+  /** Doubled K. */
+  K2: number;
+  /** The core's parent term (LS), whose J is j1. */
+  core: LSTerm;
+  /** Orbital l of the outer electron. */
+  l: number;
+  /** Doubled J. */
+  J2: number;
+  parity: "odd" | null;
+}
+
+/** A jj-coupled pair of electrons, written (j1,j2)J, e.g. "(3/2,1/2)1". */
+export interface JJTerm {
+  scheme: "jj";
+  /** As written, e.g. "(3/2,1/2)1". */
+  text: string;
+  /** Doubled j of each electron. */
+  j2s: [number, number];
+  /** Orbital l of each electron. */
+  l: [number, number];
+  /** Doubled J. */
+  J2: number;
+  parity: "odd" | null;
+}
+
+/** A level's term: LS, jK or jj coupling. S2, L and letter exist for LS terms only. */
+export type TermSymbol = LSTerm | JKTerm | JJTerm;
+
+/** The LS term of a level, or null when the level is written in another coupling scheme. */
+export function lsTerm(t: TermSymbol): LSTerm | null {
+  return t.scheme === "LS" ? t : null;
 }
 
 export interface HyperfineInput {

@@ -2,7 +2,7 @@
  * One species file → SpeciesInput. Every problem goes to the file's sink;
  * the species is returned only when the file has none.
  */
-import { isMap, type Node, type YAMLMap, type YAMLSeq } from "yaml";
+import { isMap, isScalar, type Node, type YAMLMap, type YAMLSeq } from "yaml";
 import { formatDoubled, parseDoubled } from "../physics/quantum.js";
 import { didYouMean, nearest } from "./didYouMean.js";
 import { ITEM_ID, ITEM_ID_HINT, SPECIES_ID, SPECIES_ID_HINT, pageSlug, suggestSpeciesId } from "./ids.js";
@@ -13,13 +13,15 @@ import { airToVacuum, inAirFormulaRange, vacuumToAir } from "../physics/airWavel
 import type { Dec } from "../physics/decimal.js";
 import { MOMENT_UNITS, parseMeasured, parseQuantity, type UnitTable } from "./numberText.js";
 import type { Parsed } from "./parsed.js";
-import { parseTermSymbol } from "./termSymbol.js";
+import { parseLS, parseTermSymbol, type CouplingInput } from "./termSymbol.js";
 import type { UnitKind } from "../physics/units.js";
-import { describe, MapReader, type TextAt, type YamlSource } from "./yamlExact.js";
+import { describe, MapReader, scalarText, type TextAt, type YamlSource } from "./yamlExact.js";
 
 export const SPECIES_KEYS = ["id", "label", "mass", "nucleus", "notes", "levels", "lines"] as const;
 export const NUCLEUS_KEYS = ["spin", "gI", "moment", "source"] as const;
-export const LEVEL_KEYS = ["id", "config", "term", "gJ", "hyperfine", "energy", "source", "notes"] as const;
+export const LEVEL_KEYS = ["id", "config", "term", "coupling", "gJ", "hyperfine", "energy", "source", "notes"] as const;
+export const COUPLING_KEYS = ["scheme", "core", "l"] as const;
+export const COUPLING_SCHEMES = ["jK", "jj"] as const;
 export const HYPERFINE_KEYS = ["A", "B"] as const;
 export const LINE_KEYS = ["id", "upper", "lower", "wavelength", "medium", "multipole", "source", "notes"] as const;
 export const MEDIA = ["vacuum", "air"] as const;
@@ -224,8 +226,9 @@ class SpeciesReader {
     if (id) this.writtenLevelIds.add(id.text);
     if (id && !ITEM_ID.test(id.text)) this.add(id.at, `level id "${id.text}" has characters that are not allowed`, ITEM_ID_HINT);
     const config = r.nonEmpty("config", true, "add the electron configuration, e.g. config: 5s");
-    const termText = r.text("term", true, "add the LS term, e.g. term: 2S1/2");
-    const term = termText ? this.report(parseTermSymbol(termText.text), termText.at, "term") : null;
+    const termText = r.text("term", true, "add the term, e.g. term: 2S1/2 (LS), or 2[3/2]o2 (jK) or (3/2,1/2)1 (jj) with the level's coupling");
+    const coupling = this.coupling(r);
+    const term = termText && coupling !== "invalid" ? this.report(parseTermSymbol(termText.text, coupling), termText.at, "term") : null;
     const gJ = this.measured(r.text("gJ", false), "gJ");
     const energy = this.quantity(r.text("energy", false), "frequency", "energy");
     const source = r.nonEmpty("source", true, 'name where the values come from, e.g. source: "handbook table 3"');
@@ -245,6 +248,56 @@ class SpeciesReader {
       notes: notes?.text ?? null,
       pos: { file: this.shownFile, line: at.line, column: at.column },
     };
+  }
+
+  /**
+   * A level's coupling (for jK and jj terms): null when absent, "invalid"
+   * when written but wrong (already reported).
+   */
+  coupling(level: MapReader): CouplingInput | null | "invalid" {
+    const node = level.map_("coupling", false, 'coupling is a map, e.g. coupling: { scheme: jK, core: "2Po3/2", l: 0 } or { scheme: jj, l: [1, 1] }');
+    if (!node) return level.has("coupling") ? "invalid" : null;
+    const before = this.src.sink.count;
+    const r = new MapReader(this.src, node, "coupling", COUPLING_KEYS);
+    const schemeText = r.text("scheme", true, "add scheme: jK (pair coupling) or scheme: jj");
+    const scheme = schemeText ? COUPLING_SCHEMES.find((x) => x === schemeText.text) : undefined;
+    if (schemeText && !scheme) {
+      const guess = didYouMean(schemeText.text, COUPLING_SCHEMES);
+      this.add(schemeText.at, `unknown coupling scheme "${schemeText.text}"`, `${guess ? `did you mean ${guess}? ` : ""}scheme is jK (pair coupling) or jj; an LS term takes no coupling`);
+    }
+    const orbital = (t: TextAt): number | null => {
+      if (/^\d{1,2}$/.test(t.text)) return Number(t.text);
+      this.add(t.at, `l = "${t.text}" in coupling is not an orbital quantum number`, "l is 0 (s), 1 (p), 2 (d), 3 (f), ...");
+      return null;
+    };
+    if (scheme === "jK") {
+      const coreText = r.text("core", true, 'add the parent term of the core, e.g. core: "2Po3/2"');
+      const core = coreText ? this.report(parseLS(coreText.text.trim()), coreText.at, "coupling core") : null;
+      const lText = r.text("l", true, "add the outer electron's l, e.g. l: 0 for an s electron");
+      const l = lText ? orbital(lText) : null;
+      if (this.src.sink.count > before || !core || l === null) return "invalid";
+      return { scheme, core, l };
+    }
+    if (scheme === "jj") {
+      const coreText = r.text("core", false);
+      if (coreText) this.add(coreText.at, "coupling with scheme jj has a core", "a jj term (j1,j2)J couples two electrons; give their l as l: [l1, l2] and leave core out");
+      const seq = r.seq("l", true, "add the two electrons' l, e.g. l: [1, 1]");
+      const ls: number[] = [];
+      if (seq) {
+        if (seq.items.length !== 2) this.add(this.src.place(seq), `l in a jj coupling lists ${seq.items.length} values`, "list the two electrons' l, e.g. l: [1, 1]");
+        for (const item of seq.items as (Node | null)[]) {
+          const text = isScalar(item) ? scalarText(item) : null;
+          if (text === null) this.add(this.src.place(item ?? seq), `l in coupling must list numbers, not ${describe(item)}`, "e.g. l: [1, 1]");
+          else {
+            const v = orbital({ text, at: this.src.place(item) });
+            if (v !== null) ls.push(v);
+          }
+        }
+      }
+      if (this.src.sink.count > before || ls.length !== 2) return "invalid";
+      return { scheme, l: [ls[0]!, ls[1]!] };
+    }
+    return "invalid";
   }
 
   hyperfine(level: MapReader, nucleus: NucleusState, J2: number | null): HyperfineInput | null {

@@ -153,7 +153,7 @@ function prepare(data: EngineData): PreparedSpecies {
         if (components) return components;
         // the model does not change with the field: the reduced elements are the same at every field
         const choice = chooseLineModel(sideAtZero(termIndex.has(u.id)), sideAtZero(termIndex.has(l.id)), facts(ln, u, l));
-        const reduced = choice.model === "hyperfine–Zeeman eigenstates" ? singleReducedElement : lineReducedElement(choice.reduced, u.L, l.L, u.S2, ln.k, u.J2, l.J2);
+        const reduced = choice.model === "hyperfine–Zeeman eigenstates" ? singleReducedElement : lineReducedElement(choice.reduced, u.L ?? 0, l.L ?? 0, u.S2 ?? 0, ln.k, u.J2, l.J2);
         return (components = lineComponentsFloat(ln.k, reduced));
       },
       linear: ln.linear.map((x) => ({
@@ -171,7 +171,7 @@ function prepare(data: EngineData): PreparedSpecies {
 
 /** A level's side for the model choice where only its term membership matters (the model is the same at every field). */
 const sideAtZero = (inTerm: boolean): LineSide => ({ hf: "zero field", fs: "zero field", inTerm });
-const facts = (ln: EngineLine, u: EngineLevel, l: EngineLevel) => ({ sameSpin: u.S2 === l.S2, multipole: ln.multipole, hyperfineBoth: ln.hyperfineBoth });
+const facts = (ln: EngineLine, u: EngineLevel, l: EngineLevel) => ({ sameSpin: u.S2 !== null && u.S2 === l.S2, multipole: ln.multipole, hyperfineBoth: ln.hyperfineBoth });
 
 function prepared(data: EngineData): PreparedSpecies {
   let p = preparedCache.get(data);

@@ -11,6 +11,7 @@ import { val } from "../physics/constants/constant.js";
 import { hyperfineConstants, solverLevel, type SpeciesFieldResult } from "../results/computeFields.js";
 import type { ConfiguredField } from "../results/fieldTypes.js";
 import type { SpeciesResult } from "../results/types.js";
+import { lsTerm } from "../data/model.js";
 import { sublevelTransitionPairs } from "../physics/field/sublevelTransitions.js";
 import { termText } from "../site/format.js";
 import { ENGINE_FORMAT, type EngineData } from "./types.js";
@@ -53,8 +54,9 @@ export function engineData(
         paschenBackT: strOrNull(v?.paschenBackTesla),
         term: termText(l.input.term),
         fineStructureTerm: fields.termOf.get(l.input.id)?.key ?? null,
-        S2: l.input.term.S2,
-        L: l.input.term.L,
+        // null outside LS coupling: such a level takes no LS reduced elements
+        S2: lsTerm(l.input.term)?.S2 ?? null,
+        L: lsTerm(l.input.term)?.L ?? null,
         // the list computeFields' sublevelTransitions makes (levels with hyperfine structure only)
         transitions: lv.I2 > 0 ? sublevelTransitionPairs(lv).pairs.map(({ lo, up, kind }) => ({ lo, up, kind })) : [],
       };

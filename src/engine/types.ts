@@ -30,9 +30,9 @@ export interface EngineLevel {
   term: string;
   /** Key of the treated fine-structure term the level belongs to, or null. */
   fineStructureTerm: string | null;
-  /** Doubled S and L (ordinary integer) of the level's term. */
-  S2: number;
-  L: number;
+  /** Doubled S and L (ordinary integer) of the level's term; null for a level outside LS coupling (jK, jj). */
+  S2: number | null;
+  L: number | null;
   /**
    * The level's sublevel transitions as the build lists them
    * (sublevelTransitionPairs): indices of the lower and upper sublevel in

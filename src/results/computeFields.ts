@@ -14,6 +14,7 @@
  * levels, each from its own level's solver (src/results/lineModel.ts).
  */
 import { Dec, ZERO } from "../physics/decimal.js";
+import { lsTerm, type LSTerm } from "../data/model.js";
 import type { ConstantsEdition } from "../physics/constants/constant.js";
 import { val } from "../physics/constants/constant.js";
 import { prepareHyperfineZeeman, solverForPrepared, type HyperfineZeemanLevel, type UncoupledState } from "../physics/field/hyperfineZeeman.js";
@@ -146,7 +147,7 @@ function levelFields(
   };
   const common = {
     hyperfineListed: hasHf ? l.input.hyperfine !== null : null,
-    quadratic: { scope: partners.scope, included: partners.included, missingJ2: partners.missingJ2 },
+    quadratic: { scope: partners.scope, included: partners.included, missingJ2: partners.missingJ2, ...(partners.notLS ? { notLS: partners.notLS } : {}) },
     // where the linear numbers of this J hold (single-J solver; information, not a switch)
     validity: hasHf ? linearValidity(level) : null,
     insensitiveSearchTesla: searchTo,
@@ -229,19 +230,27 @@ function levelFields(
   };
 }
 
+/** The LS term of a level the term solver was given (only LS levels are grouped into terms). */
+function lsTermOf(l: LevelResult): LSTerm {
+  const t = lsTerm(l.input.term);
+  if (!t) throw new RangeError(`level ${l.input.id} is not in LS coupling`);
+  return t;
+}
+
 /** Group levels into LS terms whose every J is listed with an energy. */
 function fineStructureTerms(s: SpeciesResult, c: ConstantsEdition, fields: ConfiguredField[]): { term: TermFieldResult; levels: LevelResult[] }[] {
   const groups = new Map<string, LevelResult[]>();
   for (const l of s.levels) {
-    if (!l.input.energy) continue;
-    const t = l.input.term;
+    // the term solver treats LS terms only; a jK or jj level is solved within its own J
+    const t = lsTerm(l.input.term);
+    if (!l.input.energy || !t) continue;
     const key = `${l.input.config} ${t.multiplicity}${t.letter}${t.parity ? "°" : ""}`;
     groups.set(key, [...(groups.get(key) ?? []), l]);
   }
   const out: { term: TermFieldResult; levels: LevelResult[] }[] = [];
   for (const [key, levels] of groups) {
     if (levels.length < 2) continue;
-    const { S2, L } = levels[0]!.input.term;
+    const { S2, L } = lsTermOf(levels[0]!);
     const expected = new Set<number>();
     for (let j2 = Math.abs(2 * L - S2); j2 <= 2 * L + S2; j2 += 2) expected.add(j2);
     const have = new Set(levels.map((l) => l.J2));
@@ -287,7 +296,7 @@ function fineStructureTerms(s: SpeciesResult, c: ConstantsEdition, fields: Confi
  */
 export function termProblem(s: SpeciesResult, levels: LevelResult[], c: ConstantsEdition): TermProblem {
   const withHf = levels.map((l) => solverLevel(s, l, c));
-  const { S2, L } = levels[0]!.input.term;
+  const { S2, L } = lsTermOf(levels[0]!);
   return {
     S2,
     L,
@@ -372,7 +381,10 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
     const hfu = hyperfineConstants(s, u);
     const hfl = hyperfineConstants(s, l);
     const hfBoth = hfu !== null && hfl !== null;
-    const facts = { sameSpin: u.input.term.S2 === l.input.term.S2, multipole: ln.input.multipole, hyperfineBoth: hfBoth };
+    const ut = lsTerm(u.input.term);
+    const lt = lsTerm(l.input.term);
+    // the LS reduced elements need both levels in LS coupling with one S
+    const facts = { sameSpin: ut !== null && lt !== null && ut.S2 === lt.S2, multipole: ln.input.multipole, hyperfineBoth: hfBoth };
     let reduced: ReducedElement | null = null;
     const atFields = fields.map((f, at): LineAtFieldResult => {
       // the one rule shared with the field calculator (src/engine/)
@@ -396,7 +408,7 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
         };
       }
       if (model === "hyperfine–Zeeman eigenstates") reduced = singleReducedElement;
-      else reduced ??= lineReducedElement(choice.reduced, u.input.term.L, l.input.term.L, u.input.term.S2, ln.k, u.J2, l.J2);
+      else reduced ??= lineReducedElement(choice.reduced, ut?.L ?? 0, lt?.L ?? 0, ut?.S2 ?? 0, ln.k, u.J2, l.J2);
       const aliases = hadFineStructureLabels(su, sl, facts) ? { Ju2: u.J2, Jl2: l.J2 } : null;
       return {
         field: f,

@@ -6,14 +6,14 @@ import { Dec } from "../physics/decimal.js";
 import type { ConstantsEdition } from "../physics/constants/constant.js";
 import { val } from "../physics/constants/constant.js";
 import { fValues, gF, hyperfineShift } from "../physics/hyperfine.js";
-import { landeExact, landeLS, orbitalG, spinG } from "../physics/lande.js";
+import { landeExact, landeJJ, landeJJExact, landeJK, landeJKExact, landeLS, orbitalG, spinG } from "../physics/lande.js";
 import { effectiveLande, gEffNote, lineComponents, multipoleRank, patternNotation, patternSummary } from "../physics/linePattern.js";
 import { mValues } from "../physics/quantum.js";
 import { Rational } from "../physics/rational.js";
 import { SPEED_OF_LIGHT } from "../physics/units.js";
 import { lorentzWavelengthPerTesla } from "../physics/airWavelength.js";
 import { linearShiftPerTesla } from "../physics/zeeman.js";
-import type { LevelInput, NucleusInput, SpeciesInput } from "../data/model.js";
+import type { LevelInput, NucleusInput, SpeciesInput, TermSymbol } from "../data/model.js";
 import type { LevelResult, LineResult, SpeciesResult } from "./types.js";
 
 /**
@@ -26,12 +26,29 @@ export function nuclearG(nucleus: NucleusInput, c: ConstantsEdition): Dec {
   return nucleus.moment.value.div(Rational.half(nucleus.I2).toDecimal()).mul(val(c.m_e_m_p)).neg();
 }
 
+/**
+ * The Landé factor of a term from its own coupling scheme's formula: with
+ * the physical gL and gS, and exact with gL = 1, gS = 2 (physics/lande.ts).
+ */
+export function couplingLande(t: TermSymbol, gL: Dec, gS: Dec): { g: Dec | null; exact: Rational | null } {
+  if (t.scheme === "LS") return { g: landeLS(t.S2, t.L, t.J2, gL, gS), exact: landeExact(t.S2, t.L, t.J2) };
+  if (t.scheme === "jK") {
+    const jk = { coreS2: t.core.S2, coreL: t.core.L, coreJ2: t.core.J2, l: t.l, K2: t.K2, J2: t.J2 };
+    return { g: landeJK(jk, gL, gS), exact: landeJKExact(jk) };
+  }
+  const jj = { l1: t.l[0], j1_2: t.j2s[0], l2: t.l[1], j2_2: t.j2s[1], J2: t.J2 };
+  return { g: landeJJ(jj, gL, gS), exact: landeJJExact(jj) };
+}
+
+/** Relative difference above which a measured gJ is said to differ from its coupling formula's value (intermediate coupling). */
+export const COUPLING_DIFFERS_ABOVE = new Dec("0.01");
+
 function computeLevel(level: LevelInput, gL: Dec, gS: Dec, I2: number, gI: Dec | null, muB_h: Dec): LevelResult {
-  const { S2, L, J2 } = level.term;
-  const gJLS = landeLS(S2, L, J2, gL, gS);
-  const gJExact = landeExact(S2, L, J2);
+  const J2 = level.term.J2;
+  const { g: gJLS, exact: gJExact } = couplingLande(level.term, gL, gS);
   const gJ = J2 === 0 ? null : level.gJ ? level.gJ.value : gJLS;
-  const gJFrom = J2 === 0 ? "none" : level.gJ ? "measured" : "LS";
+  const gJFrom = J2 === 0 ? "none" : level.gJ ? "measured" : level.term.scheme;
+  const gJDiffers = gJFrom === "measured" && gJLS !== null && !gJLS.isZero() && level.gJ!.value.sub(gJLS).abs().div(gJLS.abs()).gt(COUPLING_DIFFERS_ABOVE);
   const sublevels = mValues(J2).map((m2) => ({ m2, shiftHzPerT: linearShiftPerTesla(gJ, m2, muB_h) }));
   const hyperfine =
     I2 > 0 && gI !== null
@@ -47,7 +64,7 @@ function computeLevel(level: LevelInput, gL: Dec, gS: Dec, I2: number, gI: Dec |
           };
         })
       : [];
-  return { input: level, J2, gJ, gJFrom, gJLS, gJExact, sublevels, hyperfine };
+  return { input: level, J2, gJ, gJFrom, gJLS, gJExact, gJDiffers, sublevels, hyperfine };
 }
 
 export function computeSpecies(species: SpeciesInput, c: ConstantsEdition): SpeciesResult {

@@ -59,7 +59,7 @@ export interface LevelFieldResult {
   /** Species with nuclear spin: whether the level lists hyperfine constants (false: A = B = 0 used); null without nuclear spin. */
   hyperfineListed: boolean | null;
   /** What the second-order coefficients of `rows` include (src/results/quadraticScope.ts). */
-  quadratic: { scope: QuadraticScope; included: string[]; missingJ2: number[] };
+  quadratic: { scope: QuadraticScope; included: string[]; missingJ2: number[]; /** Set for a level outside LS coupling, whose partners are not treated. */ notLS?: "jK" | "jj" };
   /** Where the linear numbers of this J hold (single-J solver, information); null for a level without hyperfine structure. */
   validity: LinearValidity | null;
   transitions: SublevelTransition[];

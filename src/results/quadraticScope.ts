@@ -19,6 +19,7 @@ import type { ConstantsEdition } from "../physics/constants/constant.js";
 import { val } from "../physics/constants/constant.js";
 import { partnerQuadraticCoefficient, type PartnerLevel, type PartnerTerm } from "../physics/field/partnerQuadratic.js";
 import type { LevelResult, SpeciesResult } from "./types.js";
+import { lsTerm } from "../data/model.js";
 
 export type QuadraticScope = "term" | "term-partial" | "J-only";
 
@@ -28,6 +29,8 @@ export interface QuadraticPartners {
   included: string[];
   /** Doubled J′ = J ± 1 of the term that couple but are not included (not listed, or without energy). */
   missingJ2: number[];
+  /** The coupling scheme of a level outside LS coupling (its partners are not treated), else null. */
+  notLS: "jK" | "jj" | null;
   /** β_partners(F, mF) in Hz/T² (0 when nothing is included); null where perturbation theory fails. */
   coefficient: (F2: number, mF2: number) => Dec | null;
 }
@@ -35,12 +38,16 @@ export interface QuadraticPartners {
 /** Key of the LS term a level belongs to (configuration, multiplicity, L, parity mark). */
 export function termKeyOf(l: LevelResult): string {
   const t = l.input.term;
+  if (t.scheme !== "LS") return `${l.input.config} ${t.text}`; // a jK or jj level is no LS term's partner
   return `${l.input.config} ${t.multiplicity}${t.letter}${t.parity ? "°" : ""}`;
 }
 
 /** The partners of level `l` in species `s` and their second-order contribution. */
 export function quadraticPartners(s: SpeciesResult, l: LevelResult, c: ConstantsEdition, hyperfine: (l: LevelResult) => { A: Dec; B: Dec } | null): QuadraticPartners {
-  const { S2, L } = l.input.term;
+  const ls = lsTerm(l.input.term);
+  // the partner sum uses the LS structure of the term; a jK or jj level keeps its own J
+  if (!ls) return { scope: "J-only", included: [], missingJ2: [], notLS: l.input.term.scheme === "jj" ? "jj" : "jK", coefficient: () => ZERO };
+  const { S2, L } = ls;
   const key = termKeyOf(l);
   const coupling: number[] = [];
   for (const Jp2 of [l.J2 - 2, l.J2 + 2]) if (Jp2 >= Math.abs(2 * L - S2) && Jp2 <= 2 * L + S2) coupling.push(Jp2);
@@ -48,7 +55,7 @@ export function quadraticPartners(s: SpeciesResult, l: LevelResult, c: Constants
   const included = l.input.energy === null ? [] : listed;
   const missingJ2 = coupling.filter((j) => !included.some((p) => p.J2 === j));
   const scope: QuadraticScope = missingJ2.length === 0 ? "term" : included.length === 0 ? "J-only" : "term-partial";
-  if (included.length === 0) return { scope, included: [], missingJ2, coefficient: () => ZERO };
+  if (included.length === 0) return { scope, included: [], missingJ2, notLS: null, coefficient: () => ZERO };
   const asPartner = (p: LevelResult): PartnerLevel => {
     const hf = hyperfine(p);
     return { J2: p.J2, energy: p.input.energy!.si, A: hf?.A ?? ZERO, B: hf?.B ?? ZERO };
@@ -60,6 +67,7 @@ export function quadraticPartners(s: SpeciesResult, l: LevelResult, c: Constants
     scope,
     included: included.map((p) => p.input.id),
     missingJ2,
+    notLS: null,
     coefficient: (F2, mF2) => partnerQuadraticCoefficient(term, self, others, F2, mF2),
   };
 }

@@ -30,11 +30,18 @@ export interface LevelResult {
   J2: number;
   /** g in use: measured if given, else LS with gL = 1 − m_e/M and gS = −g_e; null for J = 0. */
   gJ: Dec | null;
-  gJFrom: "measured" | "LS" | "none";
-  /** LS value with the physical gL, gS (shown beside a measured one). */
+  /** Measured, or the coupling formula of the level's scheme (LS, jK, jj), or none for J = 0. */
+  gJFrom: "measured" | "LS" | "jK" | "jj" | "none";
+  /** Value from the level's coupling formula (LS, or jK / jj for levels written so) with the physical gL, gS (shown beside a measured one). */
   gJLS: Dec | null;
-  /** LS value with gL = 1, gS = 2, exact. */
+  /** The same formula with gL = 1, gS = 2, exact. */
   gJExact: Rational | null;
+  /**
+   * A measured gJ differs from the coupling formula's value by more than 1 %
+   * (intermediate coupling): the exact pattern notation then describes the
+   * coupling limit, not the atom.
+   */
+  gJDiffers: boolean;
   sublevels: SublevelShift[];
   /** Empty without nuclear spin. */
   hyperfine: HyperfineLevelResult[];

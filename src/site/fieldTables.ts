@@ -87,6 +87,7 @@ const QUAD_SCOPE = { term: "", "term-partial": " (listed partners only)", "J-onl
 export function quadraticFact(f: LevelFieldResult): string {
   const q = f.quadratic;
   const missing = q.missingJ2.map((j) => `J = ${formatDoubled(j)}`).join(" and ");
+  if (q.notLS) return `Quadratic coefficients within this J only: the level is written in ${q.notLS} coupling, and the fine-structure partner sum is made for LS terms only.`;
   if (q.scope === "J-only") return `Quadratic coefficients within this J only: the fine-structure partners (${missing}) are not listed with energies.`;
   const partners = q.included.length ? `include the fine-structure partner${q.included.length > 1 ? "s" : ""} ${q.included.join(", ")} (second order through the Zeeman coupling between J levels of the term)` : "are complete: the term has no other J the field couples to";
   return `Quadratic coefficients ${partners}${q.scope === "term-partial" ? `; ${missing} of the term not listed with an energy, so not included` : ""}.`;
@@ -94,7 +95,7 @@ export function quadraticFact(f: LevelFieldResult): string {
 
 const jList = (J2s: number[]) => J2s.map(formatDoubled).join(", ");
 const gJText = (l: LevelResult) =>
-  l.gJFrom === "measured" ? `its measured gJ = ${l.input.gJ!.text}` : l.gJFrom === "LS" ? "its LS gJ" : "no gJ (J = 0)";
+  l.gJFrom === "measured" ? `its measured gJ = ${l.input.gJ!.text}` : l.gJFrom === "none" ? "no gJ (J = 0)" : `its ${l.gJFrom} gJ`;
 
 /**
  * Which solver gave a level's energies, transitions, plots and line states,

@@ -131,11 +131,29 @@ export function polarizationSymbol(p: "sigma+" | "pi" | "sigma-" | null, q?: num
 
 const SUBSCRIPT: Record<string, string> = { "0": "₀", "1": "₁", "2": "₂", "3": "₃", "4": "₄", "5": "₅", "6": "₆", "7": "₇", "8": "₈", "9": "₉", "/": "/" };
 
-/** A term symbol typeset in plain text for captions and titles: ²P°₃/₂ (the data file may write 2Po3/2). */
-export function termText(t: { multiplicity: number; letter: string; parity: "odd" | null; J2: number }): string {
-  const sup = [...String(t.multiplicity)].map((ch) => SUPERSCRIPT[ch] ?? ch).join("");
+/** A term as the site writes it in any coupling scheme, without J and parity. */
+export type TermLike = { parity: "odd" | null; J2: number } & (
+  | { scheme?: "LS"; multiplicity: number; letter: string }
+  | { scheme: "jK"; multiplicity: number; K2: number }
+  | { scheme: "jj"; j2s: [number, number] }
+);
+
+/**
+ * The superscript and the body of a term in each coupling scheme: ²P (LS),
+ * ²[3/2] (jK: 2s+1 of the outer electron and K), (3/2,1/2) (jj: j1, j2, no superscript).
+ */
+export function termSymbolParts(t: TermLike): { sup: string; body: string } {
+  if (t.scheme === "jK") return { sup: String(t.multiplicity), body: `[${formatDoubled(t.K2)}]` };
+  if (t.scheme === "jj") return { sup: "", body: `(${formatDoubled(t.j2s[0])},${formatDoubled(t.j2s[1])})` };
+  return { sup: String(t.multiplicity), body: t.letter };
+}
+
+/** A term symbol typeset in plain text for captions and titles: ²P°₃/₂, ²[3/2]°₂, (3/2,1/2)₁ (the data file may write 2Po3/2). */
+export function termText(t: TermLike): string {
+  const { sup: s, body } = termSymbolParts(t);
+  const sup = [...s].map((ch) => SUPERSCRIPT[ch] ?? ch).join("");
   const j = [...formatDoubled(t.J2)].map((ch) => SUBSCRIPT[ch] ?? ch).join("");
-  return `${sup}${t.letter}${t.parity === "odd" ? "°" : ""}${j}`;
+  return `${sup}${body}${t.parity === "odd" ? "°" : ""}${j}`;
 }
 
 /** The short label of a sublevel transition's kind, as tables, the calculator and the finder show it. */

@@ -27,6 +27,7 @@ import { exportText, type Dec } from "../physics/decimal.js";
 import { mValues } from "../physics/quantum.js";
 import { componentAnchor, fieldStateAnchor, hyperfineAnchor, mFAnchor, mJAnchor, transitionAnchor } from "./anchors.js";
 import { formatNumber, partsText, termText, writtenParts } from "./format.js";
+import type { TermLike } from "./plainFormat.js";
 import { htmlFile, levelPagePath, linePagePath, speciesPath } from "./pageUrls.js";
 import { packInts } from "./searchCodec.js";
 import { searchTokens, termKeys } from "./searchNormalize.js";
@@ -54,11 +55,11 @@ export interface SearchSpecies {
   /** μB/h in Hz/T of the constants edition, for the shift per unit m. */
   muB_h: Dec;
   levels: {
-    input: { id: string; term: { text: string; multiplicity: number; letter: string; parity: "odd" | null; J2: number }; energy?: { si: Dec } | null; gJ?: { text: string } | null };
+    input: { id: string; term: TermLike & { text: string }; energy?: { si: Dec } | null; gJ?: { text: string } | null };
     J2: number;
     gJ: Dec | null;
     /** A measured gJ is shown as written (its own digits and uncertainty), as the levels table shows it. */
-    gJFrom?: "measured" | "LS" | "none";
+    gJFrom?: "measured" | "LS" | "jK" | "jj" | "none";
     hyperfine: { F2: number; gF: Dec | null }[];
   }[];
   lines: {

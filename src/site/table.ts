@@ -8,7 +8,7 @@ import { exportText } from "../physics/decimal.js";
 import type { Rational } from "../physics/rational.js";
 import type { Measured } from "../data/model.js";
 import { formatFraction, formatM, formatQuantum, numberParts, partsText, uncertainParts, writtenParts } from "./format.js";
-import { alignParts, type NumberParts } from "./plainFormat.js";
+import { alignParts, termSymbolParts, type NumberParts, type TermLike } from "./plainFormat.js";
 
 export { PUNCTUATION_SPACE } from "./plainFormat.js";
 
@@ -26,7 +26,9 @@ export interface Column {
 }
 
 export interface TermParts {
+  /** The superscript: 2S+1 (LS), 2s+1 of the outer electron (jK), empty (jj). */
   multiplicity: string;
+  /** The body: the L letter (LS), [K] (jK), (j1,j2) (jj). */
   letter: string;
   parity: boolean;
   J: string;
@@ -152,12 +154,13 @@ export function fractionCell(r: Rational | null): Cell {
   return { text: `${text} ${rel} ${partsText(parts)}`, sort, exact: r.toString(), fraction: { text, rel }, parts };
 }
 
-/** Term symbol split for display as ²P°₃/₂ with HTML sup/sub. */
-export function termParts(t: { multiplicity: number; letter: string; parity: "odd" | null; J2: number }): TermParts {
-  return { multiplicity: String(t.multiplicity), letter: t.letter, parity: t.parity === "odd", J: formatQuantum(t.J2) };
+/** Term symbol split for display as ²P°₃/₂ (or ²[3/2]°₂, (3/2,1/2)₁) with HTML sup/sub. */
+export function termParts(t: TermLike): TermParts {
+  const { sup, body } = termSymbolParts(t);
+  return { multiplicity: sup, letter: body, parity: t.parity === "odd", J: formatQuantum(t.J2) };
 }
 
-export const termCell = (t: { text: string; multiplicity: number; letter: string; parity: "odd" | null; J2: number }): Cell => ({
+export const termCell = (t: TermLike & { text: string }): Cell => ({
   text: t.text,
   sort: t.text,
   term: termParts(t),

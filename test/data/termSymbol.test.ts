@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
-import { parseTermSymbol, L_LETTERS } from "../../src/data/termSymbol.js";
+import { parseLS, parseTermSymbol, L_LETTERS, type CouplingInput } from "../../src/data/termSymbol.js";
 
 function term(text: string) {
-  const r = parseTermSymbol(text);
+  const r = parseLS(text);
   if (!r.ok) throw new Error(`${r.message}; ${r.hint}`);
   return r.value;
 }
@@ -10,7 +10,7 @@ function term(text: string) {
 describe("parseTermSymbol", () => {
   it("reads 2S1/2 as S = 1/2, L = 0, J = 1/2, unmarked parity", () => {
     // 2S+1 = 2 → S = 1/2; S ↔ L = 0 (common practice)
-    expect(term("2S1/2")).toEqual({ text: "2S1/2", multiplicity: 2, S2: 1, L: 0, letter: "S", J2: 1, parity: null });
+    expect(term("2S1/2")).toEqual({ scheme: "LS", text: "2S1/2", multiplicity: 2, S2: 1, L: 0, letter: "S", J2: 1, parity: null });
   });
 
   it("reads both parity marks as odd", () => {
@@ -46,6 +46,50 @@ describe("parseTermSymbol", () => {
     ["2P1/3", /not an integer or half-integer/],
   ])("refuses %s", (text, why) => {
     const r = parseTermSymbol(text);
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(`${r.message}; ${r.hint}`).toMatch(why);
+  });
+});
+
+const P32 = term("2Po3/2");
+const P12 = term("2Po1/2");
+const jK = (core: ReturnType<typeof term>, l: number): CouplingInput => ({ scheme: "jK", core, l });
+const jj = (l1: number, l2: number): CouplingInput => ({ scheme: "jj", l: [l1, l2] });
+
+describe("parseTermSymbol outside LS coupling", () => {
+  it("reads the jK term 2[3/2]o2 on a 2Po3/2 core with an s electron as K = 3/2, J = 2, odd", () => {
+    // Racah's pair-coupling notation (2s+1)[K]J (common practice), here the noble-gas 1s5 level
+    const r = parseTermSymbol("2[3/2]o2", jK(P32, 0));
+    expect(r.ok && r.value).toEqual({ scheme: "jK", text: "2[3/2]o2", multiplicity: 2, K2: 3, core: P32, l: 0, J2: 4, parity: "odd" });
+  });
+
+  it("reads the jj term (3/2,1/2)1 of two p electrons", () => {
+    // jj notation (j1,j2)J (common practice)
+    const r = parseTermSymbol("(3/2,1/2)1", jj(1, 1));
+    expect(r.ok && r.value).toEqual({ scheme: "jj", text: "(3/2,1/2)1", j2s: [3, 1], l: [1, 1], J2: 2, parity: null });
+  });
+
+  it("reads a parity mark and the ° sign in both notations", () => {
+    // o and ° both mark odd parity (common practice)
+    const a = parseTermSymbol("2[5/2]°3", jK(P32, 1));
+    const b = parseTermSymbol("(3/2,1/2)o2", jj(1, 0));
+    expect([a.ok && a.value.parity, b.ok && b.value.parity]).toEqual(["odd", "odd"]);
+  });
+
+  it.each([
+    ["2[3/2]o2", null, /no coupling.*\n?.*scheme: jK, core/],
+    ["(3/2,1/2)1", null, /no coupling.*scheme: jj, l: \[1, 1\]/],
+    ["2[3/2]o2", jj(1, 0), /coupling says scheme jj/],
+    ["2[5/2]o2", jK(P32, 0), /K = 5\/2 cannot arise from the core's j1 = 3\/2 .* l = 0.*here 3\/2/],
+    ["2[1/2]o2", jK(P12, 0), /J = 2 cannot arise from K = 1\/2 .*here 0, 1/],
+    ["3[3/2]o2", jK(P32, 0), /2s\+1 = 3 .* is not 2/],
+    ["(3/2,1/2)1", jj(0, 1), /j1 = 3\/2 cannot arise from l1 = 0 .*here 1\/2/],
+    ["(3/2,1/2)3", jj(1, 1), /J = 3 cannot arise from j1 = 3\/2 and j2 = 1\/2.*here 1, 2/],
+    ["(1,1/2)1", jj(1, 1), /j1 = 1 .* is not a half-integer/],
+    ["2S1/2", jK(P32, 0), /is an LS term, but the level gives coupling/],
+    ["2[3/2o2", jK(P32, 0), /not a jK term symbol/],
+  ])("refuses %s with coupling %j", (text, coupling, why) => {
+    const r = parseTermSymbol(text, coupling as CouplingInput | null);
     expect(r.ok).toBe(false);
     if (!r.ok) expect(`${r.message}; ${r.hint}`).toMatch(why);
   });
