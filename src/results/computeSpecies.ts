@@ -15,6 +15,7 @@ import { lorentzWavelengthPerTesla } from "../physics/airWavelength.js";
 import { linearShiftPerTesla } from "../physics/zeeman.js";
 import type { LevelInput, NucleusInput, SpeciesInput, TermSymbol } from "../data/model.js";
 import type { LevelResult, LineResult, SpeciesResult } from "./types.js";
+import { attachLinearUncertainties, type LevelLande } from "./linearUncertainties.js";
 
 /**
  * gI from the nuclear moment: gI = −(μ/I)(μN/μB), with μN/μB = m_e/m_p
@@ -67,6 +68,9 @@ function computeLevel(level: LevelInput, gL: Dec, gS: Dec, I2: number, gI: Dec |
   return { input: level, J2, gJ, gJFrom, gJLS, gJExact, gJDiffers, sublevels, hyperfine };
 }
 
+/** The coupling formula computeLevel uses, as linearUncertainties.ts takes it: a level's g from gL and gS. */
+export const levelLande: LevelLande = (level, gL, gS) => landeLS(level.term.S2, level.term.L, level.term.J2, gL, gS);
+
 export function computeSpecies(species: SpeciesInput, c: ConstantsEdition): SpeciesResult {
   const muB_h = val(c.muB_h);
   const gL = orbitalG(species.mass?.si ?? null, val(c.m_e_u));
@@ -100,7 +104,8 @@ export function computeSpecies(species: SpeciesInput, c: ConstantsEdition): Spec
       lorentzDlambdaPerT: line.wavelength ? lorentzWavelengthPerTesla(line.wavelength.si, val(c.muB_hc)) : null,
     };
   });
-  return {
+  // standard uncertainties beside the values, with the same coupling formula as computeLevel (results/linearUncertainties.ts)
+  return attachLinearUncertainties({
     input: species,
     gL,
     gS,
@@ -109,5 +114,5 @@ export function computeSpecies(species: SpeciesInput, c: ConstantsEdition): Spec
     I2,
     levels,
     lines,
-  };
+  }, c, levelLande);
 }

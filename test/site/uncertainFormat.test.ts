@@ -53,7 +53,7 @@ describe("a computed value with its standard uncertainty (concise form)", () => 
   });
 
   it("scales value and uncertainty together into another unit, exactly", () => {
-    // 13 996 244 917.1(44) Hz/T (μB/h, CODATA 2018) in MHz/G: × 1e-4 / 1e6 → 1.399 624 491 71(44)
+    // 13 996 244 917.1(44) Hz/T (μB/h, CODATA 2022) in MHz/G: × 1e-4 / 1e6 → 1.399 624 491 71(44)
     expect(partsText(uncertainDecimalParts("13996244917.1", "4.4", "1e-4", "1e6")!)).toBe(`1.399${T}624${T}491${T}71(44)`);
     expect(partsText(convertShiftUncertain("13996244917.1", "4.4", "Hz/T")!)).toBe(`13${T}996${T}244${T}917.1(44)`);
     expect(uncertainDecimalParts("1", "0", "1", "1")).toBeNull();
