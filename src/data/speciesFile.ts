@@ -226,7 +226,7 @@ class SpeciesReader {
     if (id) this.writtenLevelIds.add(id.text);
     if (id && !ITEM_ID.test(id.text)) this.add(id.at, `level id "${id.text}" has characters that are not allowed`, ITEM_ID_HINT);
     const config = r.nonEmpty("config", true, "add the electron configuration, e.g. config: 5s");
-    const termText = r.text("term", true, "add the term, e.g. term: 2S1/2 (LS), or 2[3/2]o2 (jK) or (3/2,1/2)1 (jj) with the level's coupling");
+    const termText = r.text("term", true, "add the LS term, e.g. term: 2S1/2 (or a jK or jj term with the level's coupling: 2[3/2]o2, (3/2,1/2)1)");
     const coupling = this.coupling(r);
     const term = termText && coupling !== "invalid" ? this.report(parseTermSymbol(termText.text, coupling), termText.at, "term") : null;
     const gJ = this.measured(r.text("gJ", false), "gJ");

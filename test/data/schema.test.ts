@@ -22,6 +22,12 @@ describe("species.schema.json", () => {
     for (const text of [RB87, SR88]) expect(validSpecies(js(text)), JSON.stringify(validSpecies.errors)).toBe(true);
   });
 
+  it("accepts levels outside LS coupling with their coupling", () => {
+    const jk = edit(SR88, "term: 3Po0", "term: 2[3/2]o2\n    coupling: { scheme: jK, core: 2Po3/2, l: 0 }");
+    const jj = edit(SR88, "term: 3Po0", 'term: "(3/2,1/2)1"\n    coupling: { scheme: jj, l: [1, 1] }');
+    for (const text of [jk, jj]) expect(validSpecies(js(text)), JSON.stringify(validSpecies.errors)).toBe(true);
+  });
+
   it("accepts unquoted numbers an editor sees as YAML numbers", () => {
     const text = edit(edit(RB87, `gJ: "2.00233113(20)"`, "gJ: 2.0023311300000000000000001"), "spin: 3/2", "spin: 1");
     expect(validSpecies(js(text)), JSON.stringify(validSpecies.errors)).toBe(true);
@@ -35,6 +41,9 @@ describe("species.schema.json", () => {
     ["a wavelength in MHz", edit(RB87, `"780.241209686 nm"`, `"780 MHz"`)],
     ["both gI and moment", edit(RB87, `  source: "handbook data"\nnotes`, `  moment: "+2.751818 muN"\n  source: "handbook data"\nnotes`)],
     ["a level without source", edit(SR88, `    term: 3Po0\n    source: "handbook data"\n`, "    term: 3Po0\n")],
+    ["a jK term without its coupling", edit(SR88, "term: 3Po0", "term: 2[3/2]o2")],
+    ["a coupling beside an LS term", edit(SR88, "term: 3Po0", "term: 3Po0\n    coupling: { scheme: jK, core: 2Po3/2, l: 0 }")],
+    ["a jj coupling with one l", edit(SR88, "term: 3Po0", "term: (3/2,1/2)1\n    coupling: { scheme: jj, l: [1] }")],
     ["an unknown multipole", edit(RB87, "multipole: E1", "multipole: E4")],
     ["a malformed number", edit(RB87, `gJ: "2.00233113(20)"`, `gJ: "2.0023x"`)],
   ])("rejects %s", (_name, text) => {
