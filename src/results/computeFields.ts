@@ -41,6 +41,10 @@ import {
   type ReducedElement,
 } from "../physics/field/lineAtField.js";
 import { hyperfineLinePattern } from "../physics/hyperfineLines.js";
+import { insensitivePointSensitivity, quadraticSensitivity, stateSensitivity, termInsensitivePointSensitivity, termStateSensitivity } from "../physics/field/sensitivity.js";
+import { derived, exact, minus, plus, type Uncertain } from "../physics/uncertain.js";
+import { speciesInputs, type SpeciesInputs } from "./inputUncertainties.js";
+import { fromLevelSensitivity, fromTermSensitivity, levelGJ, levelParamsU, partnerPartU, termParamsU, transitionUncertainties, uOf } from "./fieldUncertainty.js";
 import { formatDoubled } from "../physics/quantum.js";
 import type { LevelResult, LineResult, SpeciesResult } from "./types.js";
 import { quadraticPartners } from "./quadraticScope.js";
@@ -128,15 +132,20 @@ interface LevelLineStates {
 
 interface LevelComputed {
   result: LevelFieldResult;
+  /** Energies as uncertain numbers, per configured field, in the order of the line states (fieldUncertainty.ts). */
+  energiesU: Uncertain[][];
   /** Line states at configured field number `at` (made on first use). */
   lineStates: (at: number) => LevelLineStates;
 }
 
 function levelFields(
   s: SpeciesResult, l: LevelResult, c: ConstantsEdition, fields: ConfiguredField[], plotFields: PlotGrid, term: TermSolve | undefined,
+  inputs: SpeciesInputs,
 ): LevelComputed {
   const level = solverLevel(s, l, c);
   const hasHf = level.I2 > 0;
+  // the level's own parameters as uncertain numbers (A, B, gJ in use, gI, μB/h)
+  const params = levelParamsU(l, inputs, hasHf);
   const partners = quadraticPartners(s, l, c, (lv) => hyperfineConstants(s, lv));
   const searchTo = insensitiveSearchLimit(fields);
   const quadratic = (F2: number, mF2: number): Dec | null => {
@@ -145,6 +154,19 @@ function levelFields(
     const extra = partners.coefficient(F2, mF2);
     return own === null || extra === null ? null : own.plus(extra);
   };
+  // the same coefficient as an uncertain number: own part analytic, partners' part through μB/h, gS and gL (fieldUncertainty.ts)
+  const quadraticU = (F2: number, mF2: number): Uncertain | null => {
+    const extra = partners.coefficient(F2, mF2);
+    if (extra === null) return null;
+    let own: Uncertain = exact(ZERO);
+    if (hasHf) {
+      const value = quadraticZeemanCoefficient(level, F2, mF2);
+      const sens = quadraticSensitivity(level, F2, mF2);
+      if (value === null || sens === null) return null;
+      own = fromLevelSensitivity(value, sens, params);
+    }
+    return plus(own, partnerPartU(extra, inputs));
+  };
   const common = {
     hyperfineListed: hasHf ? l.input.hyperfine !== null : null,
     quadratic: { scope: partners.scope, included: partners.included, missingJ2: partners.missingJ2, ...(partners.notLS ? { notLS: partners.notLS } : {}) },
@@ -152,13 +174,19 @@ function levelFields(
     validity: hasHf ? linearValidity(level) : null,
     insensitiveSearchTesla: searchTo,
   };
-  const row = (st: { F2: number; mF2: number; highField: UncoupledState }, energies: Dec[]) => ({
+  const row = (st: { F2: number; mF2: number; highField: UncoupledState }, energies: Dec[], energiesU: Uncertain[]) => ({
     F2: st.F2,
     mF2: st.mF2,
     highField: st.highField,
     energies,
     quadraticPerTesla2: quadratic(st.F2, st.mF2),
+    energiesU: energiesU.map(uOf),
+    quadraticU: uOf(quadraticU(st.F2, st.mF2)),
   });
+  const rowOf = (rows: { F2: number; mF2: number }[]) => {
+    const index = new Map(rows.map((r, i) => [`${r.F2},${r.mF2}`, i]));
+    return (x: { F2: number; mF2: number }) => index.get(`${x.F2},${x.mF2}`)!;
+  };
   const memoAt = (make: (at: number) => LevelLineStates) => {
     const cache = new Map<number, LevelLineStates>();
     return (at: number) => {
@@ -179,6 +207,12 @@ function levelFields(
       return { fields: bs, energies: first.map((_, i) => solved.map((states) => states[i]!.energy)) };
     };
     const others = term.term.levelIds.filter((id) => id !== l.input.id);
+    const termLevels = term.term.levelIds.map((id) => s.levels.find((x) => x.input.id === id)!);
+    const tParams = termParamsU(termLevels, inputs, hasHf);
+    const energiesU = perField.map((states, at) => states.map((st) => fromTermSensitivity(st.energy, termStateSensitivity(term.prepared, st, fields[at]!.tesla), tParams)));
+    const transitions = hasHf
+      ? termSublevelTransitions(term.prepared, index, level, fields.map((f) => f.tesla), perField, { quadraticExtra: partners.coefficient, toTesla: searchTo })
+      : [];
     const solver: LevelSolver = {
       kind: "term",
       term: term.term.key,
@@ -186,13 +220,22 @@ function levelFields(
       J2s: term.prepared.problem.levels.map((x) => x.J2).sort((a, b) => a - b),
     };
     return {
+      energiesU,
       result: {
         ...common,
         solver,
-        rows: first.map((st, i) => row(st, perField.map((states) => states[i]!.energy))),
-        transitions: hasHf
-          ? termSublevelTransitions(term.prepared, index, level, fields.map((f) => f.tesla), perField, { quadraticExtra: partners.coefficient, toTesla: searchTo })
-          : [],
+        rows: first.map((st, i) => row(st, perField.map((states) => states[i]!.energy), energiesU.map((u) => u[i]!))),
+        transitions,
+        transitionsU: transitionUncertainties(
+          {
+            level, params, rowOf: rowOf(first), energies: energiesU, quadratic: (x) => quadraticU(x.F2, x.mF2),
+            point: (up, lo, tesla, hz) => {
+              const r = termInsensitivePointSensitivity(term.prepared, index, up, lo, tesla);
+              return { tesla: fromTermSensitivity(tesla, r.tesla, tParams), hz: fromTermSensitivity(hz, r.hz, tParams) };
+            },
+          },
+          transitions,
+        ),
         plot: grid ? { linear: sample(grid.linear), log: sample(grid.log) } : null,
       },
       lineStates: memoAt((at) => ({
@@ -207,6 +250,11 @@ function levelFields(
   const solve = solverForPrepared(prepared);
   const perField = fields.map((f) => solve(f.tesla));
   const first = perField[0] ?? solve(ZERO);
+  // Hellmann–Feynman on the eigenvectors already solved (no solve per input)
+  const energiesU = perField.map((states, at) => states.map((st) => fromLevelSensitivity(st.energy, stateSensitivity(level, st, fields[at]!.tesla), params)));
+  const transitions = hasHf
+    ? sublevelTransitions(level, fields.map((f) => f.tesla), { statesAtFields: perField, quadraticExtra: partners.coefficient, toTesla: searchTo })
+    : [];
   const grid = hasHf ? plotFields : null;
   const solveFloat = hasHf ? hyperfineZeemanFloatSolver(prepared) : null;
   const sample = (bs: Dec[]) => {
@@ -214,13 +262,22 @@ function levelFields(
     return { fields: bs, energies: first.map((_, i) => solved.map((states) => states.energy[i]!)) };
   };
   return {
+    energiesU,
     result: {
       ...common,
       solver: { kind: "single-J" },
-      rows: first.map((st, i) => row(st, perField.map((states) => states[i]!.energy))),
-      transitions: hasHf
-        ? sublevelTransitions(level, fields.map((f) => f.tesla), { statesAtFields: perField, quadraticExtra: partners.coefficient, toTesla: searchTo })
-        : [],
+      rows: first.map((st, i) => row(st, perField.map((states) => states[i]!.energy), energiesU.map((u) => u[i]!))),
+      transitions,
+      transitionsU: transitionUncertainties(
+        {
+          level, params, rowOf: rowOf(first), energies: energiesU, quadratic: (x) => quadraticU(x.F2, x.mF2),
+          point: (up, lo, tesla, hz) => {
+            const r = insensitivePointSensitivity(prepared, level, up, lo, tesla);
+            return { tesla: fromLevelSensitivity(tesla, r.tesla, params), hz: fromLevelSensitivity(hz, r.hz, params) };
+          },
+        },
+        transitions,
+      ),
       plot: grid ? { linear: sample(grid.linear), log: sample(grid.log) } : null,
     },
     lineStates: memoAt((at) => ({
@@ -316,6 +373,7 @@ const half = formatDoubled;
 
 function componentsOf(
   upper: LevelLineStates, lower: LevelLineStates, k: number, reduced: ReducedElement, aliases: { Ju2: number; Jl2: number } | null,
+  energiesU: { upper: Uncertain[]; lower: Uncertain[] },
 ): LineComponentAtField[] {
   const list = lineComponentsAtField(upper.states, lower.states, k, reduced)
     .filter((x) => x.strength.gt(NEGLIGIBLE))
@@ -327,6 +385,8 @@ function componentsOf(
         polarization: x.polarization,
         strength: x.strength,
         shiftHz: x.shift,
+        // a difference of two uncertain energies: shared inputs (μB/h, gI) combine before squaring
+        shiftHzU: uOf(minus(energiesU.upper[x.upper]!, energiesU.lower[x.lower]!)),
       } as LineComponentAtField,
       hu: upper.high[x.upper]!.mJ2,
       hl: lower.high[x.lower]!.mJ2,
@@ -362,7 +422,8 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
     const ts: TermSolve = { term: g.term, prepared, index: new Map(g.levels.map((l, i) => [l.input.id, i])), atFields: fields.map((f) => solve(f.tesla)) };
     for (const l of g.levels) solves.set(l.input.id, ts);
   }
-  const computed = new Map(s.levels.map((l) => [l.input.id, levelFields(s, l, c, fields, grid, solves.get(l.input.id))]));
+  const inputs = speciesInputs(s.input, c);
+  const computed = new Map(s.levels.map((l) => [l.input.id, levelFields(s, l, c, fields, grid, solves.get(l.input.id), inputs)]));
   const levels = new Map([...computed].map(([id, x]) => [id, x.result]));
 
   const regimeOf = (l: LevelResult, tesla: Dec): LineSide => {
@@ -386,6 +447,8 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
     // the LS reduced elements need both levels in LS coupling with one S
     const facts = { sameSpin: ut !== null && lt !== null && ut.S2 === lt.S2, multipole: ln.input.multipole, hyperfineBoth: hfBoth };
     let reduced: ReducedElement | null = null;
+    const gu = levelGJ(u, inputs);
+    const gl = levelGJ(l, inputs);
     const atFields = fields.map((f, at): LineAtFieldResult => {
       // the one rule shared with the field calculator (src/engine/)
       const su = regimeOf(u, f.tesla);
@@ -404,6 +467,12 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
             polarization: x.polarization,
             strength: x.strength.toDecimal(),
             shiftHz: x.shiftHzPerT.mul(f.tesla),
+            // (μB/h)·B·(g_u·m_u − g_l·m_l), with the gJ in use of each level
+            shiftHzU: uOf(derived(x.shiftHzPerT.mul(f.tesla), [
+              [val(c.muB_h).mul(f.tesla).mul(x.mu2).div(2), gu],
+              [val(c.muB_h).mul(f.tesla).mul(-x.ml2).div(2), gl],
+              [x.shiftHzPerT.mul(f.tesla).div(val(c.muB_h)), inputs.muB_h],
+            ])),
           })),
         };
       }
@@ -415,7 +484,10 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
         regime,
         model,
         ...(model === "hyperfine–Zeeman eigenstates" ? {} : { reduced: choice.reduced }),
-        components: componentsOf(computed.get(u.input.id)!.lineStates(at), computed.get(l.input.id)!.lineStates(at), ln.k, reduced, aliases),
+        components: componentsOf(computed.get(u.input.id)!.lineStates(at), computed.get(l.input.id)!.lineStates(at), ln.k, reduced, aliases, {
+          upper: computed.get(u.input.id)!.energiesU[at]!,
+          lower: computed.get(l.input.id)!.energiesU[at]!,
+        }),
       };
     });
     const hyperfine = hfBoth

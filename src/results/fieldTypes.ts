@@ -31,6 +31,24 @@ export interface FieldRow {
    * for which); null when perturbation theory fails (degenerate levels).
    */
   quadraticPerTesla2: Dec | null;
+  /** Standard uncertainty of each of `energies` (Hz; null: exact), src/results/fieldUncertainty.ts. */
+  energiesU?: (Dec | null)[];
+  /** Standard uncertainty of `quadraticPerTesla2` (Hz/T²; null: exact or no coefficient). */
+  quadraticU?: Dec | null;
+}
+
+/**
+ * Standard uncertainties of one sublevel transition's numbers (same units as
+ * SublevelTransition; null: exact). A field-insensitive point whose
+ * uncertainty could not be propagated (B = 0 reached only by an accidental
+ * cancellation of first-order slopes) says so with `propagated: false`.
+ */
+export interface TransitionUncertainty {
+  zeroFieldHz: Dec | null;
+  firstOrderHzPerTesla: Dec | null;
+  secondOrderHzPerTesla2: Dec | null;
+  atFields: (Dec | null)[];
+  fieldInsensitive: { tesla: Dec | null; hz: Dec | null; propagated: boolean }[];
 }
 
 /**
@@ -63,6 +81,8 @@ export interface LevelFieldResult {
   /** Where the linear numbers of this J hold (single-J solver, information); null for a level without hyperfine structure. */
   validity: LinearValidity | null;
   transitions: SublevelTransition[];
+  /** Standard uncertainties of `transitions`, same order. */
+  transitionsU?: TransitionUncertainty[];
   /** Upper end of the field-insensitive search of `transitions`, T: max(1 T, twice the largest configured field). */
   insensitiveSearchTesla: Dec;
   /** Energies for the plots (float64, plot-only): sample fields (T) and one energy list per row. */
@@ -97,6 +117,8 @@ export interface LineComponentAtField {
   strength: Dec;
   /** Frequency offset from the zero-field line centre (hyperfine-free), Hz. */
   shiftHz: Dec;
+  /** Standard uncertainty of `shiftHz` (Hz; null: exact). */
+  shiftHzU?: Dec | null;
   /**
    * The fine-structure state labels ("J=3/2, mJ=1/2") under which builds
    * before the term solver listed this component (the strongest one of its

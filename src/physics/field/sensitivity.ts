@@ -47,7 +47,7 @@ import { blockMatrix, blockMatrixFloat, blockOperators, type FieldState, type Hy
 import { jzSquaredElement } from "./quadraticZeeman.js";
 import { symmetricEigen } from "./symmetricEigen.js";
 import { breitRabiApplies } from "./breitRabi.js";
-import type { PreparedTerm, TermFieldState } from "./termHyperfineZeeman.js";
+import { solveTermBlock, type PreparedTerm, type TermFieldState } from "./termHyperfineZeeman.js";
 
 /** ∂(number)/∂p for the parameters of one level. */
 export interface LevelSensitivity {
@@ -344,4 +344,48 @@ export function termStateSensitivity(prepared: PreparedTerm, state: TermFieldSta
   }
   const sOff = dg.isZero() ? ZERO : field.mul(sz).div(dg);
   return { energy, A, B, gJ, gI: field.mul(iz), gS: sOff, gL: sOff.neg(), muB_h: state.slope.mul(tesla).div(p.muB_h) };
+}
+
+/** TermSensitivity as one flat list (energy, A, B, gJ per level, then gI, gS, gL, μB/h) and back. */
+function flatTerm(s: TermSensitivity): Dec[] {
+  return [...s.energy, ...s.A, ...s.B, ...s.gJ, s.gI, s.gS, s.gL, s.muB_h];
+}
+function unflatTerm(x: Dec[], n: number): TermSensitivity {
+  const part = (k: number) => x.slice(k * n, (k + 1) * n);
+  return { energy: part(0), A: part(1), B: part(2), gJ: part(3), gI: x[4 * n]!, gS: x[4 * n + 1]!, gL: x[4 * n + 2]!, muB_h: x[4 * n + 3]! };
+}
+
+/**
+ * insensitivePointSensitivity for a level solved with its term
+ * (termHyperfineZeeman.ts): the same implicit-function theorem and the same
+ * central difference in B (h = 1e-12·B*), with the two sublevels' M blocks
+ * solved in Dec at B* ± h (solveTermBlock) and termStateSensitivity on their
+ * eigenvectors. `level` indexes TermProblem.levels. Exact: no (as above).
+ * Worked example: with one listed J it is insensitivePointSensitivity.
+ */
+export function termInsensitivePointSensitivity(
+  prepared: PreparedTerm, level: number, upper: { F2: number; mF2: number }, lower: { F2: number; mF2: number }, tesla: Dec,
+): { tesla: TermSensitivity; hz: TermSensitivity } {
+  if (!tesla.gt(0)) throw new RangeError("the point must be at B > 0");
+  const n = prepared.problem.levels.length;
+  const h = tesla.mul(INSENSITIVE_STEP);
+  const pick = (s: { F2: number; mF2: number }, b: Dec): TermFieldState => {
+    const block = prepared.blocks.find((x) => x.M2 === s.mF2);
+    const st = block ? solveTermBlock(prepared, block, b).find((x) => x.level === level && x.state.F2 === s.F2) : undefined;
+    if (!st) throw new RangeError(`no sublevel F=${s.F2}/2, mF=${s.mF2}/2`);
+    return st.state;
+  };
+  const at = (b: Dec) => {
+    const u = pick(upper, b);
+    const l = pick(lower, b);
+    const su = flatTerm(termStateSensitivity(prepared, u, b));
+    const sl = flatTerm(termStateSensitivity(prepared, l, b));
+    return { s: su.map((x, i) => x.minus(sl[i]!)), g: u.slope.minus(l.slope) };
+  };
+  const plus = at(tesla.plus(h));
+  const minus = at(tesla.minus(h));
+  const gB = plus.g.minus(minus.g).div(h.mul(2));
+  const dB = plus.s.map((x, i) => x.minus(minus.s[i]!).div(h.mul(2)).div(gB).neg());
+  const dHz = plus.s.map((x, i) => x.plus(minus.s[i]!).div(2));
+  return { tesla: unflatTerm(dB, n), hz: unflatTerm(dHz, n) };
 }
