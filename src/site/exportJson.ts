@@ -14,11 +14,24 @@ import { absoluteFrequency, lockPoints, vacuumWavelength } from "../physics/lock
 import { SPEED_OF_LIGHT } from "../physics/units.js";
 import { PM, sigmaCentroidSeparation } from "./wavelengthSplitting.js";
 import { angularCoefficientTexts, lineSecondOrder, viewFactors } from "../results/observation.js";
+import { sigmaSeparationU } from "../results/linearUncertainties.js";
 
 export const EXPORT_DIGITS = 30;
 export const EXPORT_FORMAT = "sublevel-atlas/export@1";
 
 const num = (x: Dec | null): string | null => (x === null ? null : exportText(x, EXPORT_DIGITS));
+
+/**
+ * A decimal key and its standard uncertainty as the sibling key `<key>_u`
+ * (same unit; README "Uncertainties"): `withU("gF", x, u)` →
+ * { gF: "…", gF_u: "…" }. The `_u` key is always written: null when the
+ * number is exact or none of its inputs carries an uncertainty (and when
+ * the number itself is null). Every key ending in `_u` matches the schema's
+ * `uncertainty` definition (patternProperties "_u$").
+ */
+export function withU<K extends string>(key: K, x: Dec | null, u: Dec | null | undefined): Record<K | `${K}_u`, string | null> {
+  return { [key]: num(x), [`${key}_u`]: x === null ? null : num(u ?? null) } as Record<K | `${K}_u`, string | null>;
+}
 
 export interface ExportContext {
   constantsEdition: string;
@@ -151,26 +164,27 @@ export function speciesExport(s: SpeciesResult, ctx: ExportContext, fields?: { r
     constants: ctx.constantsEdition,
     data_version: ctx.dataVersion,
     nucleus: s.input.nucleus
-      ? { I: formatDoubled(s.I2), gI: num(s.gI), gI_from: s.gIFrom }
+      ? { I: formatDoubled(s.I2), ...withU("gI", s.gI, s.gIU), gI_from: s.gIFrom }
       : null,
-    gL: num(s.gL),
-    gS: num(s.gS),
+    ...withU("gL", s.gL, s.gLU),
+    ...withU("gS", s.gS, s.gSU),
     levels: s.levels.map((l) => ({
       id: l.input.id,
       config: l.input.config,
       term: l.input.term.text,
       J: formatDoubled(l.J2),
-      gJ: num(l.gJ),
+      ...withU("gJ", l.gJ, l.gJU),
       gJ_from: l.gJFrom,
+      // kept from before gJ_u (same value for a measured gJ); gJ_u also covers a gJ from the coupling formula
       gJ_uncertainty: l.gJFrom === "measured" ? num(l.input.gJ!.uncertainty) : null,
-      gJ_LS: num(l.gJLS),
+      ...withU("gJ_LS", l.gJLS, l.gJLSU),
       gJ_exact: l.gJExact ? l.gJExact.toString() : null,
-      sublevels: l.sublevels.map((m) => ({ mJ: formatDoubled(m.m2), shift_Hz_per_T: num(m.shiftHzPerT) })),
+      sublevels: l.sublevels.map((m) => ({ mJ: formatDoubled(m.m2), ...withU("shift_Hz_per_T", m.shiftHzPerT, m.shiftHzPerTU) })),
       hyperfine: l.hyperfine.map((h) => ({
         F: formatDoubled(h.F2),
-        gF: num(h.gF),
-        zero_field_Hz: num(h.zeroFieldHz),
-        sublevels: h.sublevels.map((m) => ({ mF: formatDoubled(m.m2), shift_Hz_per_T: num(m.shiftHzPerT) })),
+        ...withU("gF", h.gF, h.gFU),
+        ...withU("zero_field_Hz", h.zeroFieldHz, h.zeroFieldHzU),
+        sublevels: h.sublevels.map((m) => ({ mF: formatDoubled(m.m2), ...withU("shift_Hz_per_T", m.shiftHzPerT, m.shiftHzPerTU) })),
       })),
       ...extra(l.input.id),
     })),
@@ -179,11 +193,11 @@ export function speciesExport(s: SpeciesResult, ctx: ExportContext, fields?: { r
       upper: ln.upper.input.id,
       lower: ln.lower.input.id,
       multipole: ln.input.multipole,
-      wavelength_m: ln.input.wavelength ? num(ln.input.wavelength.si) : null,
+      ...withU("wavelength_m", ln.input.wavelength?.si ?? null, ln.input.wavelength?.siUncertainty),
       wavelength_medium: ln.input.medium,
-      air_wavelength_m: ln.input.airWavelength ? num(ln.input.airWavelength.si) : null,
-      frequency_Hz: num(ln.frequencyHz),
-      g_eff: num(ln.gEff),
+      ...withU("air_wavelength_m", ln.input.airWavelength?.si ?? null, ln.input.airWavelength?.siUncertainty),
+      ...withU("frequency_Hz", ln.frequencyHz, ln.frequencyHzU),
+      ...withU("g_eff", ln.gEff, ln.gEffU),
       ...secondOrderExport(lineSecondOrder(ln)),
       angular_coefficients: angularCoefficientTexts(ln),
       pattern: ln.pattern,
@@ -193,16 +207,16 @@ export function speciesExport(s: SpeciesResult, ctx: ExportContext, fields?: { r
         ml: formatDoubled(c.ml2),
         delta_m: c.deltaM,
         polarization: c.polarization,
-        shift_lorentz: num(c.shiftLorentz),
+        ...withU("shift_lorentz", c.shiftLorentz, c.shiftLorentzU),
         shift_lorentz_exact: c.shiftLorentzExact.toString(),
-        shift_Hz_per_T: num(c.shiftHzPerT),
+        ...withU("shift_Hz_per_T", c.shiftHzPerT, c.shiftHzPerTU),
         strength: c.strength.toString(),
         ...viewExport(ln.k, c.deltaM),
       })),
-      lorentz_dlambda_pm_per_T: ln.lorentzDlambdaPerT ? num(ln.lorentzDlambdaPerT.mul(PM)) : null,
+      ...withU("lorentz_dlambda_pm_per_T", ln.lorentzDlambdaPerT?.mul(PM) ?? null, ln.lorentzDlambdaPerTU?.mul(PM)),
       sigma_separation_at_fields: (fields?.configured ?? []).map((b) => {
         const sep = sigmaCentroidSeparation(ln, b.tesla);
-        return { B_T: fieldText(b.tesla), B_text: b.text, centroid_separation_pm: sep ? num(sep.mul(PM)) : null };
+        return { B_T: fieldText(b.tesla), B_text: b.text, ...withU("centroid_separation_pm", sep?.mul(PM) ?? null, sigmaSeparationU(ln, b.tesla)?.mul(PM)) };
       }),
       ...lineExtra(ln.input.id, ln.frequencyHz),
     })),

@@ -68,9 +68,9 @@ describe("the species export", () => {
     expect(e.id).toBe("rb87");
     const g = e.levels[0];
     expect(Object.keys(g)).toEqual(expect.arrayContaining(["id", "J", "gJ", "gJ_exact", "sublevels", "hyperfine", "field_table"]));
-    expect(g.sublevels[0]).toEqual({ mJ: "-1/2", shift_Hz_per_T: expect.any(String) });
+    expect(g.sublevels[0]).toEqual({ mJ: "-1/2", shift_Hz_per_T: expect.any(String), shift_Hz_per_T_u: expect.any(String) });
     expect(g.hyperfine.map((h: { F: string }) => h.F)).toEqual(["1", "2"]);
-    expect(Object.keys(g.hyperfine[0].sublevels[0])).toEqual(["mF", "shift_Hz_per_T"]);
+    expect(Object.keys(g.hyperfine[0].sublevels[0])).toEqual(["mF", "shift_Hz_per_T", "shift_Hz_per_T_u"]);
     const d2 = e.lines[0];
     expect(Object.keys(d2)).toEqual(expect.arrayContaining(["id", "upper", "lower", "g_eff", "pattern", "components"]));
     expect(Object.keys(d2.components[0])).toEqual(
