@@ -16,7 +16,7 @@ import { fileURLToPath } from "node:url";
 const ROOT = resolve(dirname(fileURLToPath(import.meta.url)), "../..");
 
 /** Browser entry points: src/browser/<name>.ts → assets/<name>.js. */
-export const BROWSER_ENTRIES: readonly string[] = ["forward", "calculator", "units", "tables", "finder", "lockReference"];
+export const BROWSER_ENTRIES: readonly string[] = ["forward", "calculator", "units", "tables", "finder", "lockReference", "observer"];
 
 export function bundleBrowser(siteDir: string, entries: readonly string[] = BROWSER_ENTRIES): void {
   if (entries.length === 0) return;

@@ -62,6 +62,7 @@ import { lockView, type LockView } from "./lockTables.js";
 import { lorentzWavelengthText, wavelengthSplitTable, wavelengthsText } from "./wavelengthSplitting.js";
 import { lineDlambdaSectionAnchor } from "./anchors.js";
 import { termParts, type Cell, type Table, type TermParts } from "./table.js";
+import { observerView, type ObserverView } from "./observerView.js";
 
 /** One step of the breadcrumb trail; the last has no link. */
 export interface Crumb {
@@ -169,6 +170,8 @@ export interface LineView extends PageCommon {
   /** The line at each bias field, on this page; or null when they have pages of their own (fieldLinks). */
   atFields: AtFieldView[] | null;
   fieldLinks: { text: string; url: string; regime: string; model: string }[];
+  /** What an observer sees at an angle θ to the field: G, angular factors, the stick plot with its θ control. */
+  observer: ObserverView;
 }
 
 export interface LineFieldView extends PageCommon {
@@ -479,6 +482,7 @@ export function lineViews(
       pattern: ln.pattern,
       summary: ln.summary,
       components: componentsTable(ln, home),
+      observer: observerView(ln, home),
       componentsAnchor: lineComponentsAnchor(ln.input.id),
       fieldsAnchor: lineFieldsAnchor(ln.input.id),
       hyperfine: f.hyperfine ? hyperfineGroupsTable(ln, f.hyperfine, home) : null,
