@@ -45,6 +45,10 @@ describe("chooseLineModel", () => {
     // M1 or a change of spin: the term states, with the line's own J pair only
     expect(chooseLineModel(mixed, weak, { ...e1, multipole: "M1" })).toEqual({ regime: "Paschen–Back", model: "term hyperfine–Zeeman eigenstates", reduced: "own J pair" });
     expect(chooseLineModel(mixed, weak, { ...e1, sameSpin: false }).reduced).toBe("own J pair");
+    // M2 is magnetic too (its spin part is not modelled); E2 and E3 act on the orbital coordinates, so LS applies
+    expect(chooseLineModel(mixed, weak, { ...e1, multipole: "M2" }).reduced).toBe("own J pair");
+    expect(chooseLineModel(mixed, weak, { ...e1, multipole: "E2" }).reduced).toBe("LS");
+    expect(chooseLineModel(mixed, weak, { ...e1, multipole: "E3" }).reduced).toBe("LS");
     // no nuclear spin: the term states without hyperfine structure
     expect(chooseLineModel(weak, { ...weak, inTerm: false }, { ...e1, hyperfineBoth: false }).model).toBe("term Zeeman eigenstates");
     // neither level in a listed term
@@ -63,6 +67,8 @@ describe("chooseLineModel", () => {
     expect(hadFineStructureLabels(side("intermediate", true), side("linear Zeeman", false), e1)).toBe(true);
     expect(hadFineStructureLabels(side("linear Zeeman", true), side("linear Zeeman", false), e1)).toBe(false);
     expect(hadFineStructureLabels(side("intermediate", true), side("linear Zeeman", false), { ...e1, multipole: "M1" })).toBe(false);
+    // those builds had no M2 or E3 lines, so none of their rows needs an alias
+    expect(hadFineStructureLabels(side("intermediate", true), side("linear Zeeman", false), { ...e1, multipole: "E3" })).toBe(false);
     expect(hadFineStructureLabels(side("intermediate", false), side("linear Zeeman", false), e1)).toBe(false);
   });
 
