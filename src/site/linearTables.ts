@@ -13,7 +13,7 @@ import type { HyperfineLevelResult, LevelResult, LineResult, SpeciesResult } fro
 import { componentAnchor, hyperfineAnchor, levelAnchor, levelShiftsAnchor, lineAnchor, mFAnchor, mJAnchor } from "./anchors.js";
 import { formatQuantum, polarizationSymbol, termText, writtenDigits } from "./format.js";
 import { levelPagePath, linePagePath } from "./pageUrls.js";
-import { fractionCell, measuredCell, numberCell, quantumCell, termCell, textCell, type Cell, type Table } from "./table.js";
+import { fractionCell, measuredCell, numberCell, quantumCell, termCell, textCell, uncertainCell, type Cell, type Table } from "./table.js";
 import { makeTable, type ColumnSpec } from "./tableSpec.js";
 
 /** Significant digits shown for shifts and g values on pages. */
@@ -37,22 +37,28 @@ export function csvName(home: TableHome, ...parts: string[]): string {
   return `${home.csvBase}/${[home.speciesId, ...parts.map(pageSlug)].join("-")}.csv`;
 }
 
-/** The three shift columns (MHz/G switchable by the reader, GHz/T, cm⁻¹/T) of a row's shift in Hz/T. */
-export function shiftColumns<R>(hzPerT: (r: R) => Dec): ColumnSpec<R>[] {
+/** A standard uncertainty in another unit by a linear conversion (null stays null). */
+const uIn = (u: Dec | null | undefined, f: (x: Dec) => Dec): Dec | null => (u === null || u === undefined ? null : f(u).abs());
+
+/**
+ * The three shift columns (MHz/G switchable by the reader, GHz/T, cm⁻¹/T) of a row's shift in Hz/T,
+ * each with the shift's standard uncertainty in the concise form when `uHzPerT` gives one.
+ */
+export function shiftColumns<R>(hzPerT: (r: R) => Dec, uHzPerT: (r: R) => Dec | null | undefined = () => null): ColumnSpec<R>[] {
   return [
     {
       key: "shift", label: "shift", unit: "MHz/G", kind: "number", switchable: true,
-      cell: (r) => numberCell(hzPerTeslaToMHzPerGauss(hzPerT(r)), SHOWN_DIGITS, { hzPerT: exportText(hzPerT(r), 30) }),
+      cell: (r) => uncertainCell(hzPerTeslaToMHzPerGauss(hzPerT(r)), uIn(uHzPerT(r), hzPerTeslaToMHzPerGauss), SHOWN_DIGITS, { hzPerT: exportText(hzPerT(r), 30) }, uHzPerT(r) ?? undefined),
     },
-    { key: "shift_GHz_T", label: "shift", unit: "GHz/T", kind: "number", cell: (r) => numberCell(hzPerTeslaToGHzPerTesla(hzPerT(r)), SHOWN_DIGITS) },
-    { key: "shift_cm_T", label: "shift", unit: "cm⁻¹/T", kind: "number", cell: (r) => numberCell(hzPerTeslaToWavenumberPerTesla(hzPerT(r)), SHOWN_DIGITS) },
+    { key: "shift_GHz_T", label: "shift", unit: "GHz/T", kind: "number", cell: (r) => uncertainCell(hzPerTeslaToGHzPerTesla(hzPerT(r)), uIn(uHzPerT(r), hzPerTeslaToGHzPerTesla), SHOWN_DIGITS) },
+    { key: "shift_cm_T", label: "shift", unit: "cm⁻¹/T", kind: "number", cell: (r) => uncertainCell(hzPerTeslaToWavenumberPerTesla(hzPerT(r)), uIn(uHzPerT(r), hzPerTeslaToWavenumberPerTesla), SHOWN_DIGITS) },
   ];
 }
 
 function gUsedCell(l: LevelResult): Cell {
   if (l.gJ === null) return { text: "—", sort: "" };
   if (l.gJFrom === "measured" && l.input.gJ) return measuredCell(l.input.gJ, l.gJ);
-  return numberCell(l.gJ, SHOWN_DIGITS);
+  return uncertainCell(l.gJ, l.gJU ?? null, SHOWN_DIGITS);
 }
 
 /**
@@ -116,7 +122,7 @@ export function mJTable(l: LevelResult, home: TableHome): Table {
       columns: [
         { key: "mJ", label: "mJ", kind: "quantum", cell: (m) => quantumCell(m.m2, true) },
         { key: "gm", label: "gJ·mJ", kind: "number", cell: (m) => numberCell(l.gJ === null ? new Dec(0) : l.gJ.mul(m.m2).div(2), SHOWN_DIGITS) },
-        ...shiftColumns<(typeof l.sublevels)[number]>((m) => m.shiftHzPerT),
+        ...shiftColumns<(typeof l.sublevels)[number]>((m) => m.shiftHzPerT, (m) => m.shiftHzPerTU),
       ],
     },
     l.sublevels,
@@ -135,8 +141,8 @@ export function hyperfineTable(l: LevelResult, home: TableHome): Table {
       anchor: (h) => hyperfineAnchor(lid, h.F2),
       columns: [
         { key: "F", label: "F", kind: "quantum", cell: (h) => quantumCell(h.F2) },
-        { key: "gF", label: "gF", kind: "number", cell: (h) => numberCell(h.gF, 12) },
-        { key: "E0", label: "zero-field energy", unit: "MHz", kind: "number", cell: (h) => numberCell(h.zeroFieldHz.div(MHZ), 12) },
+        { key: "gF", label: "gF", kind: "number", cell: (h) => uncertainCell(h.gF, h.gFU ?? null, 12) },
+        { key: "E0", label: "zero-field energy", unit: "MHz", kind: "number", cell: (h) => uncertainCell(h.zeroFieldHz.div(MHZ), uIn(h.zeroFieldHzU, (x) => x.div(MHZ)), 12) },
       ],
     },
     l.hyperfine,
@@ -157,8 +163,8 @@ export function hyperfineSublevelsTable(l: LevelResult, home: TableHome): Table 
       columns: [
         { key: "F", label: "F", kind: "quantum", cell: ({ h }) => quantumCell(h.F2) },
         { key: "mF", label: "mF", kind: "quantum", cell: ({ m }) => quantumCell(m.m2, true) },
-        { key: "gF", label: "gF", kind: "number", cell: ({ h }) => numberCell(h.gF, SHOWN_DIGITS) },
-        ...shiftColumns<(typeof rows)[number]>(({ m }) => m.shiftHzPerT),
+        { key: "gF", label: "gF", kind: "number", cell: ({ h }) => uncertainCell(h.gF, h.gFU ?? null, SHOWN_DIGITS) },
+        ...shiftColumns<(typeof rows)[number]>(({ m }) => m.shiftHzPerT, ({ m }) => m.shiftHzPerTU),
       ],
     },
     rows,
@@ -190,7 +196,7 @@ export function glanceTable(s: SpeciesResult, home: TableHome, muB_h: Dec): Tabl
         { key: "level", label: "level", kind: "text", cell: (r) => (r.hf ? textCell("") : textCell(r.level.input.id, `#${levelAnchor(r.level.input.id)}`)) },
         { key: "term", label: "term", kind: "term", cell: (r) => (r.hf ? textCell("") : termCell(r.level.input.term)) },
         { key: "which", label: "J or F", kind: "text", cell: (r) => textCell(r.hf ? `F = ${formatQuantum(r.hf.F2)}` : `J = ${formatQuantum(r.level.J2)}`) },
-        { key: "g", label: "gJ or gF", kind: "number", cell: (r) => (g(r) === null ? textCell("—") : r.hf ? numberCell(r.hf.gF, SHOWN_DIGITS) : gUsedCell(r.level)) },
+        { key: "g", label: "gJ or gF", kind: "number", cell: (r) => (g(r) === null ? textCell("—") : r.hf ? uncertainCell(r.hf.gF, r.hf.gFU ?? null, SHOWN_DIGITS) : gUsedCell(r.level)) },
         {
           key: "per_m", label: "shift per unit m", unit: "MHz/G", kind: "number", switchable: true,
           cell: (r) => {
@@ -200,7 +206,7 @@ export function glanceTable(s: SpeciesResult, home: TableHome, muB_h: Dec): Tabl
             return numberCell(hzPerTeslaToMHzPerGauss(hzPerT), SHOWN_DIGITS, { hzPerT: exportText(hzPerT, 30) });
           },
         },
-        { key: "E0", label: "zero-field position", unit: "MHz", kind: "number", cell: (r) => numberCell(r.hf ? r.hf.zeroFieldHz.div(MHZ) : null, 12) },
+        { key: "E0", label: "zero-field position", unit: "MHz", kind: "number", cell: (r) => uncertainCell(r.hf ? r.hf.zeroFieldHz.div(MHZ) : null, uIn(r.hf?.zeroFieldHzU, (x) => x.div(MHZ)), 12) },
       ],
     },
     rows,
@@ -223,7 +229,7 @@ export function linesTable(s: SpeciesResult, home: TableHome): Table {
         { key: "multipole", label: "multipole", kind: "text", cell: (ln) => textCell(ln.input.multipole) },
         { key: "wavelength", label: "λ (vacuum)", unit: "nm", kind: "number", cell: (ln) => quantityCell(ln.input.wavelength, "nm", "1e-9") },
         { key: "air_wavelength", label: "λ (air)", unit: "nm", kind: "number", when: s.lines.some((ln) => ln.input.wavelength), cell: (ln) => airWavelengthCell(ln.input) },
-        { key: "g_eff", label: "g_eff", kind: "number", cell: (ln) => numberCell(ln.gEff, SHOWN_DIGITS) },
+        { key: "g_eff", label: "g_eff", kind: "number", cell: (ln) => uncertainCell(ln.gEff, ln.gEffU ?? null, SHOWN_DIGITS) },
         { key: "pattern", label: "pattern", kind: "text", cell: (ln) => textCell(ln.pattern ?? "—") },
         { key: "summary", label: "reading", kind: "note", cell: (ln) => textCell(ln.summary) },
       ],
@@ -249,8 +255,8 @@ export function componentsTable(ln: LineResult, home: TableHome): Table {
         { key: "pol", label: "polarization", kind: "text", cell: (c) => textCell(polarizationSymbol(c.polarization, c.deltaM)) },
         { key: "strength", label: "strength", kind: "fraction", cell: (c) => fractionCell(c.strength) },
         { key: "lorentz_exact", label: "shift, LS exact", unit: "Lorentz units", kind: "fraction", cell: (c) => fractionCell(c.shiftLorentzExact) },
-        { key: "lorentz", label: "shift", unit: "Lorentz units", kind: "number", cell: (c) => numberCell(c.shiftLorentz, SHOWN_DIGITS) },
-        ...shiftColumns<(typeof ln.components)[number]>((c) => c.shiftHzPerT),
+        { key: "lorentz", label: "shift", unit: "Lorentz units", kind: "number", cell: (c) => uncertainCell(c.shiftLorentz, c.shiftLorentzU ?? null, SHOWN_DIGITS) },
+        ...shiftColumns<(typeof ln.components)[number]>((c) => c.shiftHzPerT, (c) => c.shiftHzPerTU),
       ],
     },
     ln.components,
