@@ -4,6 +4,7 @@
  * Numbers are decimal strings at up to EXPORT_DIGITS significant digits;
  * exact fractions are strings like "4/3"; ids are the data file's ids.
  */
+import { lineCouplingNote } from "./couplingNote.js";
 import type { Dec } from "../physics/decimal.js";
 import { exportText } from "../physics/decimal.js";
 import { formatDoubled } from "../physics/quantum.js";
@@ -172,6 +173,7 @@ export function speciesExport(s: SpeciesResult, ctx: ExportContext, fields?: { r
       id: l.input.id,
       config: l.input.config,
       term: l.input.term.text,
+      coupling: l.input.term.scheme,
       J: formatDoubled(l.J2),
       ...withU("gJ", l.gJ, l.gJU),
       gJ_from: l.gJFrom,
@@ -179,6 +181,7 @@ export function speciesExport(s: SpeciesResult, ctx: ExportContext, fields?: { r
       gJ_uncertainty: l.gJFrom === "measured" ? num(l.input.gJ!.uncertainty) : null,
       ...withU("gJ_LS", l.gJLS, l.gJLSU),
       gJ_exact: l.gJExact ? l.gJExact.toString() : null,
+      gJ_LS_differs: l.gJDiffers,
       sublevels: l.sublevels.map((m) => ({ mJ: formatDoubled(m.m2), ...withU("shift_Hz_per_T", m.shiftHzPerT, m.shiftHzPerTU) })),
       hyperfine: l.hyperfine.map((h) => ({
         F: formatDoubled(h.F2),
@@ -201,6 +204,7 @@ export function speciesExport(s: SpeciesResult, ctx: ExportContext, fields?: { r
       ...secondOrderExport(lineSecondOrder(ln)),
       angular_coefficients: angularCoefficientTexts(ln),
       pattern: ln.pattern,
+      pattern_note: lineCouplingNote(ln),
       summary: ln.summary,
       components: ln.components.map((c) => ({
         mu: formatDoubled(c.mu2),

@@ -4,6 +4,7 @@
  * table, lines with their patterns, and each line's J-resolved components.
  * Each is a makeTable spec (tableSpec.ts) over rows of the results.
  */
+import { levelCouplingNote, lineCouplingNote } from "./couplingNote.js";
 import { Dec, exportText } from "../physics/decimal.js";
 import { hzPerTeslaToGHzPerTesla, hzPerTeslaToMHzPerGauss, hzPerTeslaToWavenumberPerTesla } from "../physics/zeeman.js";
 import { formatDoubled } from "../physics/quantum.js";
@@ -97,9 +98,9 @@ export function levelsTable(s: SpeciesResult, home: TableHome, hasPage: (l: Leve
         { key: "config", label: "configuration", kind: "text", cell: (l) => textCell(l.input.config) },
         { key: "term", label: "term", kind: "term", cell: (l) => termCell(l.input.term) },
         { key: "J", label: "J", kind: "quantum", cell: (l) => quantumCell(l.J2) },
-        { key: "gJ_exact", label: "gJ (LS, exact)", kind: "fraction", cell: (l) => fractionCell(l.gJExact) },
+        { key: "gJ_exact", label: "gJ exact (gL = 1, gS = 2)", kind: "fraction", cell: (l) => fractionCell(l.gJExact) },
         { key: "gJ", label: "gJ in use", kind: "number", cell: gUsedCell },
-        { key: "gJ_from", label: "gJ from", kind: "text", cell: (l) => textCell(l.gJFrom === "measured" ? "measured" : l.gJFrom === "LS" ? "LS, gL and gS" : "J = 0") },
+        { key: "gJ_from", label: "gJ from", kind: "text", cell: (l) => textCell(l.gJFrom === "measured" ? levelCouplingNote(l) ?? "measured" : l.gJFrom === "none" ? "J = 0" : `${l.gJFrom}, gL and gS`) },
         { key: "A", label: "A", unit: "MHz", kind: "number", cell: (l) => quantityCell(l.input.hyperfine?.A, "MHz", "1e6") },
         { key: "B", label: "B", unit: "MHz", kind: "number", cell: (l) => quantityCell(l.input.hyperfine?.B, "MHz", "1e6") },
         { key: "source", label: "source", kind: "note", cell: (l) => textCell(l.input.source) },
@@ -231,7 +232,7 @@ export function linesTable(s: SpeciesResult, home: TableHome): Table {
         { key: "air_wavelength", label: "λ (air)", unit: "nm", kind: "number", when: s.lines.some((ln) => ln.input.wavelength), cell: (ln) => airWavelengthCell(ln.input) },
         { key: "g_eff", label: "g_eff", kind: "number", cell: (ln) => uncertainCell(ln.gEff, ln.gEffU ?? null, SHOWN_DIGITS) },
         { key: "pattern", label: "pattern", kind: "text", cell: (ln) => textCell(ln.pattern ?? "—") },
-        { key: "summary", label: "reading", kind: "note", cell: (ln) => textCell(ln.summary) },
+        { key: "summary", label: "reading", kind: "note", cell: (ln) => textCell([ln.summary, lineCouplingNote(ln)].filter(Boolean).join(" ")) },
       ],
     },
     s.lines,

@@ -8,6 +8,7 @@
  * unit mF. Linear shifts are odd in m (ΔE = g m μB B), so the per-m list
  * gives m > 0 only; the sheet says so. Per line: λ, g_eff and the pattern.
  */
+import { patternLimitTag } from "./couplingNote.js";
 import type { ConstantsEdition } from "../physics/constants/constant.js";
 import { val } from "../physics/constants/constant.js";
 import { Dec } from "../physics/decimal.js";
@@ -188,7 +189,7 @@ export function speciesSheet(s: SpeciesResult, opts: SheetOptions, fields?: { re
           cell: (ln) => (ln.input.airWavelength ? wavelengthCell(ln.input.airWavelength) : ln.input.wavelength ? textCell("outside the air formula") : numberCell(null)),
         },
         { key: "g_eff", label: "g_eff", kind: "number", cell: (ln) => numberCell(ln.gEff, SHEET_DIGITS) },
-        { key: "pattern", label: "pattern", kind: "text", cell: (ln) => textCell(ln.pattern ?? "—") },
+        { key: "pattern", label: "pattern", kind: "text", cell: (ln) => textCell(ln.pattern === null ? "—" : [ln.pattern, patternLimitTag(ln)].filter(Boolean).join(" — ")) },
         { key: "components", label: "components: shift in Lorentz units (strength)", kind: "text", when: opts.mList, cell: (ln) => textCell(componentList(ln)) },
       ],
     },

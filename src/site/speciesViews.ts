@@ -11,6 +11,7 @@
  * page, so the overview's forwarding map (forwarding.ts) can send an old
  * link on to the page that now holds its row.
  */
+import { lineCouplingNote } from "./couplingNote.js";
 import { exportText, type Dec } from "../physics/decimal.js";
 import { pageSlug } from "../data/ids.js";
 import { formatDoubled } from "../physics/quantum.js";
@@ -87,7 +88,8 @@ export interface OverviewView extends PageCommon {
   sheetUrl: string;
   glance: Table;
   intervals: { levelId: string; items: { F: string; Fp: string; mhz: Cell }[] }[];
-  patterns: { lineId: string; url: string; pattern: string; gEff: string; sketch: string; sketchShown: boolean; summary: string }[];
+  /** couplingNote: intermediate coupling of a level of the line (the pattern then describes the coupling limit), or null. */
+  patterns: { lineId: string; url: string; pattern: string; gEff: string; sketch: string; sketchShown: boolean; summary: string; couplingNote: string | null }[];
   levels: Table;
   shiftSections: { anchor: string; termParts: TermParts; title: string; levelUrl: string | null; tables: Table[] }[];
   lines: Table;
@@ -155,6 +157,8 @@ export interface LineView extends PageCommon {
   lineId: string;
   heading: string;
   pattern: string | null;
+  /** Intermediate coupling of a level of the line: the pattern describes the coupling limit, not the atom (null when neither level is marked). */
+  couplingNote: string | null;
   summary: string;
   components: Table;
   componentsAnchor: string;
@@ -290,6 +294,7 @@ export function overviewView(v: SpeciesViewsInput, compact: OverviewCompaction =
       pattern: ln.pattern ?? "—",
       gEff: ln.gEff === null ? `— (${ln.gEffNote ?? "not defined"})` : formatNumber(ln.gEff, SHOWN_DIGITS),
       summary: ln.summary,
+      couplingNote: lineCouplingNote(ln),
       sketch: patternSketchSvg(`sketch-${safeFile(ln.input.id)}`, ln.input.id, ln.components.map((c) => ({ lorentz: c.shiftLorentz, strength: c.strength.toDecimal(), polarization: c.polarization }))),
     })),
     levels: levelsTable(s, home, (l) => hasLevelPage(v.fields, l, compact)),
@@ -480,6 +485,7 @@ export function lineViews(
       lineId: ln.input.id,
       heading: `${ln.input.id}: ${ln.upper.input.id} → ${ln.lower.input.id}`,
       pattern: ln.pattern,
+      couplingNote: lineCouplingNote(ln),
       summary: ln.summary,
       components: componentsTable(ln, home),
       observer: observerView(ln, home),
