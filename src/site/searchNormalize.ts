@@ -45,6 +45,10 @@ export function searchTokens(text: string): string[] {
   const folded = [...text].map((ch) => SCRIPT_DIGITS[ch] ?? ch).join("");
   let s = folded.replace(/[_{}^]/g, "").toLowerCase();
   for (const [re, to] of PHRASES) s = s.replace(re, to);
+  // terms outside LS coupling, parity mark dropped: jK "2[3/2]o2" → "2[3/2]2"; jj "(3/2, 1/2)1" → "(3/2+1/2)1", one token
+  s = s
+    .replace(/(\d*)\[\s*(\d+(?:\/2)?)\s*\]\s*o?\s*(\d+(?:\/2)?)/g, "$1[$2]$3")
+    .replace(/\(\s*(\d+\/2)\s*,\s*(\d+\/2)\s*\)\s*o?\s*(\d+(?:\/2)?)/g, "($1+$2)$3");
   return s
     .replace(/(\d)[\u2009\u202f](?=\d)/g, "$1")
     .replace(/\s*=\s*/g, "=")
@@ -55,7 +59,8 @@ export function searchTokens(text: string): string[] {
 
 /**
  * Index keys of a term symbol: with and without multiplicity, so that a
- * reader who types only "P3/2" finds it too. Example: "2Po3/2" → ["2p3/2", "p3/2"].
+ * reader who types only "P3/2" finds it too. Example: "2Po3/2" → ["2p3/2", "p3/2"];
+ * jK "2[3/2]o2" → ["2[3/2]2", "[3/2]2"]; jj "(3/2,1/2)1" → ["(3/2+1/2)1"].
  */
 export function termKeys(termText: string): string[] {
   const [full] = searchTokens(termText);

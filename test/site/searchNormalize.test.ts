@@ -12,6 +12,20 @@ describe("search normalization", () => {
     for (const s of SPELLINGS_2P3_2) expect(searchTokens(s), s).toEqual(["2p3/2"]);
   });
 
+  it("gives the spellings of a jK term (2[3/2]°2, Racah's pair-coupling notation) one token, with and without 2s+1", () => {
+    // common practice: the noble-gas 1s5 level is written 2[3/2]°2, [3/2]2, ²[3/2]°₂ or with a TeX subscript
+    for (const s of ["2[3/2]o2", "2[3/2]°2", "²[3/2]°₂", "2[3/2]_2", "2[3/2]2"]) expect(searchTokens(s), s).toEqual(["2[3/2]2"]);
+    expect(termKeys("2[3/2]o2")).toEqual(["2[3/2]2", "[3/2]2"]);
+    expect(searchTokens("[3/2]2")).toEqual(["[3/2]2"]);
+  });
+
+  it("keeps a jj term (j1,j2)J one token, with or without a space after the comma", () => {
+    // common practice: (3/2,1/2)1, (3/2, 1/2)₁ and (3/2,1/2)°1 name one level
+    for (const s of ["(3/2,1/2)1", "(3/2, 1/2)₁", "(3/2,1/2)°1", "(3/2,1/2)_1"]) expect(searchTokens(s), s).toEqual(["(3/2+1/2)1"]);
+    expect(termKeys("(3/2,1/2)1")).toEqual(["(3/2+1/2)1"]);
+    expect(searchTokens("Ar (3/2,1/2)1 F=2")).toEqual(["ar", "(3/2+1/2)1", "f=2"]);
+  });
+
   it("keeps the multiplicity-free form for readers who type only P3/2", () => {
     expect(searchTokens("P3/2")).toEqual(["p3/2"]);
     expect(termKeys("2Po3/2")).toEqual(["2p3/2", "p3/2"]);
