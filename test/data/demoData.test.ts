@@ -36,6 +36,14 @@ describe("demo data", () => {
     expect(level("hg202", "6s6p-3P1").source).toMatch(/from memory/);
   });
 
+  it("has 40Ar metastable 4s 2[3/2]°2 in jK coupling on a 2P°3/2 core, with a measured g near 1.50", () => {
+    // textbook: the level is 2[3/2]°2 of 3p⁵(²P°3/2)4s in jK coupling (g = 3/2 with gS = 2);
+    // from memory: NIST ASD, Ar I, its Landé g is listed as 1.506.
+    const t = level("ar40", "3p5-4s-K3/2-J2").term;
+    expect(t.scheme === "jK" && [t.K2, t.J2, t.core.text, t.l]).toEqual([3, 4, "2Po3/2", 0]);
+    expect(Math.abs(Number(level("ar40", "3p5-4s-K3/2-J2").gJ!.text) - 1.5)).toBeLessThan(0.01);
+  });
+
   it("names a source on every level and every line", () => {
     for (const s of demo.species) {
       for (const l of s.levels) expect(l.source.length, `${s.id} ${l.id}`).toBeGreaterThan(10);
