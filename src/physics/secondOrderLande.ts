@@ -62,3 +62,41 @@ export function secondOrderLande(upper: { J2: number; g: Dec | null }, lower: { 
   const delta = diff.mul(diff).mul(s.mul(16).sub(d.mul(d).mul(7)).sub(4)).div(80);
   return gBar.mul(gBar).sub(delta);
 }
+
+/**
+ * The partial derivatives of G with respect to the two g values, for the
+ * first-order propagation of their uncertainties (GUM §5.1; the sensitivity
+ * coefficients of physics/uncertain.ts). From G = ḡ² − δ above:
+ *
+ *     ∂ḡ/∂g_u = 1/2 + d/4,   ∂ḡ/∂g_l = 1/2 − d/4,   K = 16s − 7d² − 4,
+ *     ∂G/∂g_u = 2ḡ(1/2 + d/4) − (g_u − g_l)·K/40,
+ *     ∂G/∂g_l = 2ḡ(1/2 − d/4) + (g_u − g_l)·K/40,
+ *
+ * so u(G)² = (∂G/∂g_u·u(g_u))² + (∂G/∂g_l·u(g_l))² + 2·(∂G/∂g_u)(∂G/∂g_l)·u(g_u, g_l)
+ * (the covariance from shared inputs is kept by the caller's chain rule).
+ * A J = 0 level (g null) has g = 0 exactly; its slope is still returned.
+ *
+ * Selection rules: as secondOrderLande (dipole lines only). Exact in the
+ * working precision: G is a quadratic form in g_u and g_l.
+ *
+ * Worked examples (by hand from the formula above): Na D2 (J_u = 3/2,
+ * g_u = 4/3; J_l = 1/2, g_l = 2): d = 3, s = 9/2, K = 5, ḡ = 7/6, so
+ * ∂G/∂g_u = (7/3)(5/4) + (2/3)(5/40) = 3 and ∂G/∂g_l = (7/3)(−1/4) − (2/3)(5/40) = −2/3.
+ * A line with a J = 0 lower level (Fe I 525.02 nm, J_u = 1, g_u = 3): K = 0
+ * and ḡ = g_u, so ∂G/∂g_u = 2g_u = 6, ∂G/∂g_l = 0, and u(G) = 2·g_u·u(g_u).
+ */
+export function secondOrderLandeSlopes(upper: { J2: number; g: Dec | null }, lower: { J2: number; g: Dec | null }): { dGdgu: Dec; dGdgl: Dec } {
+  const gu = upper.g ?? new Dec(0);
+  const gl = lower.g ?? new Dec(0);
+  const s = jj1(upper.J2).add(jj1(lower.J2)).toDecimal();
+  const d = jj1(upper.J2).sub(jj1(lower.J2)).toDecimal();
+  const diff = gu.sub(gl);
+  const gBar = gu.add(gl).div(2).add(diff.mul(d).div(4));
+  const K = s.mul(16).sub(d.mul(d).mul(7)).sub(4);
+  const cross = diff.mul(K).div(40);
+  const half = new Dec(1).div(2);
+  return {
+    dGdgu: gBar.mul(2).mul(half.add(d.div(4))).sub(cross),
+    dGdgl: gBar.mul(2).mul(half.sub(d.div(4))).add(cross),
+  };
+}

@@ -23,6 +23,7 @@
  *   g_eff = (gu + gl)/2 + (gu − gl)[Ju(Ju+1) − Jl(Jl+1)]/4                 ∂/∂gu = 1/2 + d/4, ∂/∂gl = 1/2 − d/4
  *   ν = c/λ (c exact)                                                      ∂ν/∂λ = −c/λ², so u(ν) = c·u(λ)/λ²
  *   Δλ per Lorentz unit per tesla = λ²·μB/(hc)                             ∂/∂λ = 2λ·μB/(hc), ∂/∂(μB/(hc)) = λ²
+ *   G = ḡ² − δ (physics/secondOrderLande.ts, dipole lines)                 ∂G/∂gu, ∂G/∂gl from secondOrderLandeSlopes
  *
  * A wavelength given in air is converted to vacuum with its relative
  * uncertainty kept (data/speciesFile.ts); the dispersion of air changes
@@ -31,6 +32,7 @@
 import { Dec } from "../physics/decimal.js";
 import type { ConstantsEdition } from "../physics/constants/constant.js";
 import { effectiveLande } from "../physics/linePattern.js";
+import { secondOrderLande, secondOrderLandeSlopes } from "../physics/secondOrderLande.js";
 import { gF as hyperfineG, hyperfineShift } from "../physics/hyperfine.js";
 import { Rational } from "../physics/rational.js";
 import { SPEED_OF_LIGHT } from "../physics/units.js";
@@ -66,6 +68,8 @@ export interface LevelUncertain {
 
 export interface LineUncertain {
   gEff: Uncertain | null;
+  /** Second-order effective Landé factor G (rank 1 only; null above). */
+  G: Uncertain | null;
   frequencyHz: Uncertain | null;
   lorentzDlambdaPerT: Uncertain | null;
   /** Per component (order of LineResult.components): gu·mu − gl·ml and the same in Hz/T. */
@@ -128,6 +132,17 @@ function lineUncertain(ln: LineResult, s: SpeciesInputs, levels: Map<string, Lev
       [cl, gl],
     ]);
   }
+  let G: Uncertain | null = null;
+  if (ln.k === 1) {
+    // gu and gl keep their shared inputs (g_e, the mass), so their covariance enters u(G)
+    const up = { J2: ln.upper.J2, g: ln.upper.J2 === 0 ? null : gu.value };
+    const lo = { J2: ln.lower.J2, g: ln.lower.J2 === 0 ? null : gl.value };
+    const { dGdgu, dGdgl } = secondOrderLandeSlopes(up, lo);
+    G = derived(secondOrderLande(up, lo), [
+      [dGdgu, gu],
+      [dGdgl, gl],
+    ]);
+  }
   const lambda = s.wavelength(ln.input.id);
   const frequencyHz = lambda === null ? null : derived(SPEED_OF_LIGHT.div(lambda.value), [[SPEED_OF_LIGHT.div(lambda.value.pow(2)).neg(), lambda]]);
   const lorentzDlambdaPerT =
@@ -144,7 +159,7 @@ function lineUncertain(ln: LineResult, s: SpeciesInputs, levels: Map<string, Lev
     ]);
     return { shiftLorentz, shiftHzPerT: times(shiftLorentz, s.muB_h) };
   });
-  return { gEff, frequencyHz, lorentzDlambdaPerT, components };
+  return { gEff, G, frequencyHz, lorentzDlambdaPerT, components };
 }
 
 /**
@@ -186,6 +201,7 @@ export function attachLinearUncertainties(result: SpeciesResult, c: ConstantsEdi
   for (const ln of result.lines) {
     const lu = all.lines.get(ln.input.id)!;
     ln.gEffU = u(lu.gEff);
+    ln.GU = u(lu.G);
     ln.frequencyHzU = u(lu.frequencyHz);
     ln.lorentzDlambdaPerTU = u(lu.lorentzDlambdaPerT);
     ln.components.forEach((cp, i) => {

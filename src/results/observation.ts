@@ -14,6 +14,8 @@ import type { LineResult } from "./types.js";
 export interface LineSecondOrder {
   /** G with the g values in use (measured where given); null above rank 1. */
   G: Dec | null;
+  /** Its standard uncertainty from the g values' (results/linearUncertainties.ts); null when exact or above rank 1. */
+  GU: Dec | null;
   /** G from the exact LS g values; null above rank 1. */
   GExact: Rational | null;
   /** Why G is null, for the pages; null when it is given. */
@@ -22,9 +24,10 @@ export interface LineSecondOrder {
 
 /** G of a line (rank 1 only; otherwise nulls and the note). */
 export function lineSecondOrder(ln: LineResult): LineSecondOrder {
-  if (ln.k !== 1) return { G: null, GExact: null, GNote: G_NOT_DEFINED_NOTE };
+  if (ln.k !== 1) return { G: null, GU: null, GExact: null, GNote: G_NOT_DEFINED_NOTE };
   return {
     G: secondOrderLande({ J2: ln.upper.J2, g: ln.upper.gJ }, { J2: ln.lower.J2, g: ln.lower.gJ }),
+    GU: ln.GU ?? null,
     GExact: secondOrderLandeExact({ J2: ln.upper.J2, g: ln.upper.gJExact }, { J2: ln.lower.J2, g: ln.lower.gJExact }),
     GNote: null,
   };

@@ -67,6 +67,8 @@ export interface LineResult {
   /** Effective Landé factor; null for lines of rank 2 or 3 (E2, M2, E3; gEffNote says why). */
   gEff: Dec | null;
   gEffU?: Dec | null;
+  /** Standard uncertainty of G, the second-order effective Landé factor (results/observation.ts; rank 1 only), from the g values in use. */
+  GU?: Dec | null;
   /** Why gEff is null, for the pages; null when it is given. */
   gEffNote: string | null;
   /** Classical notation from exact LS g values (rank 2 and 3: the |Δm| = 1 shifts, then after a semicolon each further |Δm|); null only for a rank below 1. */

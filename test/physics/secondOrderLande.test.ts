@@ -4,7 +4,7 @@ import { Dec } from "../../src/physics/decimal.js";
 import { landeExact } from "../../src/physics/lande.js";
 import { effectiveLande, lineComponents } from "../../src/physics/linePattern.js";
 import { Rational } from "../../src/physics/rational.js";
-import { secondOrderLande, secondOrderLandeExact } from "../../src/physics/secondOrderLande.js";
+import { secondOrderLande, secondOrderLandeExact, secondOrderLandeSlopes } from "../../src/physics/secondOrderLande.js";
 
 interface GRow {
   Ju2: number;
@@ -100,5 +100,41 @@ describe("secondOrderLande", () => {
     // by hand, as above
     const v = secondOrderLande({ J2: 3, g: new Dec(4).div(3) }, { J2: 1, g: new Dec(2) });
     expect(v.toSignificantDigits(40).eq(new Dec(4).div(3).toSignificantDigits(40))).toBe(true);
+  });
+});
+
+describe("secondOrderLandeSlopes", () => {
+  const exactly = (x: Dec, r: Rational) => expect(x.toSignificantDigits(40).eq(r.toDecimal().toSignificantDigits(40)), `${x} vs ${r}`).toBe(true);
+
+  it("repeats its worked example: Na D2 has ∂G/∂g_u = 3 and ∂G/∂g_l = −2/3", () => {
+    // by hand from G = ḡ² − δ (Landi Degl'Innocenti and Landolfi 2004): d = 3, s = 9/2, K = 5, ḡ = 7/6
+    const s = secondOrderLandeSlopes({ J2: 3, g: new Dec(4).div(3) }, { J2: 1, g: new Dec(2) });
+    exactly(s.dGdgu, Rational.of(3));
+    exactly(s.dGdgl, Rational.of(-2, 3));
+  });
+
+  it("gives 2·g_u and 0 for a line to a J = 0 level (Fe I 525.02 nm, g_u = 3), where G = g_u²", () => {
+    // textbook: G = g_eff² = g_u² when the lower level has J = 0, so dG/dg_u = 2·g_u
+    const s = secondOrderLandeSlopes({ J2: 2, g: new Dec(3) }, { J2: 0, g: null });
+    exactly(s.dGdgu, Rational.of(6));
+    exactly(s.dGdgl, Rational.ZERO);
+  });
+
+  it("equals the derivatives of sympy's quadratic form for fourteen (J_u, J_l) pairs", () => {
+    // sympy's direct sum gives G = a·g_u² + b·g_u·g_l + c·g_l², so ∂G/∂g_u = 2a·g_u + b·g_l and ∂G/∂g_l = b·g_u + 2c·g_l
+    const gs: [Rational, Rational][] = [
+      [Rational.of(3, 2), Rational.of(-2, 7)],
+      [Rational.of(5, 3), Rational.of(11, 4)],
+    ];
+    for (const row of fixture.G.filter((r) => r.Ju2 > 0 && r.Jl2 > 0)) {
+      const a = Rational.parse(row.G.gu2);
+      const b = Rational.parse(row.G.gugl);
+      const c = Rational.parse(row.G.gl2);
+      for (const [gu, gl] of gs) {
+        const s = secondOrderLandeSlopes({ J2: row.Ju2, g: gu.toDecimal() }, { J2: row.Jl2, g: gl.toDecimal() });
+        exactly(s.dGdgu, a.mul(Rational.of(2)).mul(gu).add(b.mul(gl)));
+        exactly(s.dGdgl, b.mul(gu).add(c.mul(Rational.of(2)).mul(gl)));
+      }
+    }
   });
 });

@@ -4,6 +4,7 @@ import { CODATA_2022 } from "../../src/physics/constants/codata2022.js";
 import { standardUncertainty, type Uncertain } from "../../src/physics/uncertain.js";
 import { computeSpecies, levelLande } from "../../src/results/computeSpecies.js";
 import { linearUncertain, sigmaSeparationU } from "../../src/results/linearUncertainties.js";
+import { lineSecondOrder } from "../../src/results/observation.js";
 import { loadDemo } from "../engine/demo.js";
 import { computeFrom } from "./speciesFrom.js";
 
@@ -77,6 +78,57 @@ lines:
     close(sep.div(line.lorentzDlambdaPerTU!).div(line.gEff!.abs().mul(2)), dec("1"), "1e-4");
   });
 
+  it("gives G of a line to a J = 0 level the uncertainty 2·g·u(g), and G of a doublet line its two slopes' sum", () => {
+    const { result } = computeFrom(`id: x
+label: "X"
+levels:
+  - { id: a, config: 4s2, term: 1S0, source: test }
+  - { id: b, config: 4s4p, term: 3Po1, gJ: "1.50115(25)", source: test }
+lines:
+  - { id: L, upper: b, lower: a, multipole: E1, source: test }
+`);
+    const doublet = computeFrom(`id: y
+label: "Y"
+levels:
+  - { id: c, config: 3s, term: 2S1/2, gJ: "2.00231(4)", source: test }
+  - { id: d, config: 3p, term: 2Po3/2, gJ: "1.3342(6)", source: test }
+lines:
+  - { id: D2, upper: d, lower: c, multipole: E1, source: test }
+`).result;
+    // textbook: G = g_eff² = g² with a J = 0 level (Landi Degl'Innocenti and Landolfi 2004), so u(G) = 2·g·u(g)
+    const L = result.lines.find((l) => l.input.id === "L")!;
+    close(L.GU!, dec("1.50115").mul(2).mul(dec("0.00025")));
+    // J_u = 3/2, J_l = 1/2: d = 3, s = 9/2, K = 16s − 7d² − 4 = 5 (hand); ḡ = (g_u + g_l)/2 + (g_u − g_l)·3/4,
+    // ∂G/∂g_u = 2ḡ(1/2 + 3/4) − (g_u − g_l)·5/40, ∂G/∂g_l = 2ḡ(1/2 − 3/4) + (g_u − g_l)·5/40; the two measured g independent
+    const gu = dec("1.3342");
+    const gl = dec("2.00231");
+    const gBar = gu.add(gl).div(2).add(gu.sub(gl).mul(3).div(4));
+    const cross = gu.sub(gl).mul(5).div(40);
+    const su = gBar.mul(2).mul(dec("1.25")).sub(cross);
+    const sl = gBar.mul(2).mul(dec("-0.25")).add(cross);
+    const D2 = doublet.lines.find((l) => l.input.id === "D2")!;
+    close(D2.GU!, su.mul(dec("0.0006")).pow(2).add(sl.mul(dec("0.00004")).pow(2)).sqrt());
+  });
+
+  it("gives G no uncertainty above rank 1 and keeps the shared g_e of two LS levels correlated", () => {
+    const { result } = computeFrom(`id: x
+label: "X"
+levels:
+  - { id: a, config: 3s, term: 2S1/2, source: test }
+  - { id: b, config: 3p, term: 2Po3/2, source: test }
+  - { id: c, config: 3d, term: 2D5/2, source: test }
+lines:
+  - { id: D2, upper: b, lower: a, multipole: E1, source: test }
+  - { id: Q, upper: c, lower: a, multipole: E2, source: test }
+`);
+    expect(result.lines.find((l) => l.input.id === "Q")!.GU ?? null).toBeNull();
+    // without a mass gL = 1 exactly; gS = −g_e, so g(²S1/2) = g_e and g(²P3/2) = 1 + g_e/3 (textbook LS formula):
+    // G = 4/3 at g_e = 2 moves with g_e through both levels at once, dG/dg_e = 3·(1/3) + (−2/3)·1 = 1/3 (slopes 3 and −2/3 at
+    // the LS values, hand-worked in test/physics/secondOrderLande.test.ts; at the physical g_e they differ by 10⁻³ relative)
+    const uGe = dec(CODATA_2022.g_e.uncertainty);
+    close(result.lines.find((l) => l.input.id === "D2")!.GU!, uGe.div(3), "1e-2");
+  });
+
   it("carries exactly the values the results show (the uncertainties belong to the numbers on the page)", () => {
     for (const sp of folder.species) {
       const r = computeSpecies(sp, constants);
@@ -103,6 +155,7 @@ lines:
       for (const ln of r.lines) {
         const lu = all.lines.get(ln.input.id)!;
         same(lu.gEff, ln.gEff);
+        same(lu.G, lineSecondOrder(ln).G);
         same(lu.frequencyHz, ln.frequencyHz);
         same(lu.lorentzDlambdaPerT, ln.lorentzDlambdaPerT);
         ln.components.forEach((c, i) => {
