@@ -3,7 +3,9 @@
  * species at one field, exactly (the build's 60-digit path with that field
  * as the only bias field), printed as JSON: `{ B_T, levels, transitions,
  * lines }` with the keys of the export's field_table and at_fields entries,
- * decimals as strings of up to 30 significant digits (src/engine/exactAt.ts).
+ * decimals as strings of up to 30 significant digits (src/engine/exactAt.ts),
+ * each with its standard uncertainty as the export writes it (`E_Hz_u`,
+ * `Hz_u`, `shift_Hz_u`, `frequency_Hz_u`; null when exact).
  *
  * The field is text such as "4.7 G", "0.47mT", "37 µT" or a number of tesla
  * (src/engine/fieldText.ts); words after the species id are joined, so

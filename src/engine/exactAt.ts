@@ -18,8 +18,11 @@ import type { SpeciesResult } from "../results/types.js";
 import { EXPORT_DIGITS } from "../site/exportJson.js";
 import { absoluteFrequency } from "../physics/lockPoints.js";
 import type { AtResult } from "./types.js";
+import { rss } from "../results/fieldUncertainty.js";
 
 const num = (x: Dec): string => exportText(x, EXPORT_DIGITS);
+/** A standard uncertainty as the export's _u keys write it: null when exact. */
+const numU = (x: Dec | null | undefined): string | null => (x ? num(x) : null);
 
 /** The answer at configured field number `index` of results already computed. */
 export function atFromResults(s: SpeciesResult, f: SpeciesFieldResult, field: ConfiguredField, index: number): AtResult<string> {
@@ -31,16 +34,18 @@ export function atFromResults(s: SpeciesResult, f: SpeciesFieldResult, field: Co
         F: formatDoubled(r.F2),
         mF: formatDoubled(r.mF2),
         E_Hz: num(r.energies[index]!),
+        E_Hz_u: numU(r.energiesU?.[index]),
         high_field: { mJ: formatDoubled(r.highField.mJ2), mI: formatDoubled(r.highField.mI2) },
       })),
     })),
     transitions: s.levels.flatMap((l) =>
-      f.levels.get(l.input.id)!.transitions.map((t) => ({
+      f.levels.get(l.input.id)!.transitions.map((t, k) => ({
         level: l.input.id,
         lower: { F: formatDoubled(t.lower.F2), mF: formatDoubled(t.lower.mF2) },
         upper: { F: formatDoubled(t.upper.F2), mF: formatDoubled(t.upper.mF2) },
         kind: t.kind,
         Hz: num(t.atFields[index]!.hz),
+        Hz_u: numU(f.levels.get(l.input.id)!.transitionsU?.[k]?.atFields[index]),
       })),
     ),
     lines: s.lines.map((ln) => {
@@ -56,7 +61,9 @@ export function atFromResults(s: SpeciesResult, f: SpeciesFieldResult, field: Co
           polarization: c.polarization,
           relative_strength: exportText(c.strength, 20),
           shift_Hz: num(c.shiftHz),
+          shift_Hz_u: numU(c.shiftHzU),
           frequency_Hz: ln.frequencyHz === null ? null : num(absoluteFrequency(ln.frequencyHz, c.shiftHz)),
+          frequency_Hz_u: ln.frequencyHz === null ? null : numU(rss(c.shiftHzU, ln.frequencyHzU)),
         })),
       };
     }),

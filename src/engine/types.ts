@@ -105,6 +105,8 @@ export interface AtState<N> {
   F: string;
   mF: string;
   E_Hz: N;
+  /** Standard uncertainty of E_Hz (exact path only, `npm run at`; null when exact). */
+  E_Hz_u?: N | null;
   high_field: { mJ: string; mI: string };
 }
 
@@ -114,6 +116,8 @@ export interface AtTransition<N> {
   upper: { F: string; mF: string };
   kind: "magnetic-dipole" | "two-photon";
   Hz: N;
+  /** Standard uncertainty of Hz (exact path only; null when exact). */
+  Hz_u?: N | null;
 }
 
 export interface AtComponent<N> {
@@ -123,6 +127,9 @@ export interface AtComponent<N> {
   polarization: Polarization;
   relative_strength: N;
   shift_Hz: N;
+  /** Standard uncertainties of shift_Hz and frequency_Hz (exact path only; null when exact). */
+  shift_Hz_u?: N | null;
+  frequency_Hz_u?: N | null;
   /** Absolute frequency of the component, the line frequency c/λ + shift_Hz; null when the line has no wavelength. */
   frequency_Hz: N | null;
 }

@@ -41,10 +41,11 @@ import {
   type ReducedElement,
 } from "../physics/field/lineAtField.js";
 import { hyperfineLinePattern } from "../physics/hyperfineLines.js";
+import { lockPoints } from "../physics/lockPoints.js";
 import { insensitivePointSensitivity, quadraticSensitivity, stateSensitivity, termInsensitivePointSensitivity, termStateSensitivity } from "../physics/field/sensitivity.js";
 import { derived, exact, minus, plus, type Uncertain } from "../physics/uncertain.js";
 import { speciesInputs, type SpeciesInputs } from "./inputUncertainties.js";
-import { fromLevelSensitivity, fromTermSensitivity, levelGJ, levelParamsU, partnerPartU, termParamsU, transitionUncertainties, uOf } from "./fieldUncertainty.js";
+import { fromLevelSensitivity, fromTermSensitivity, hyperfineOffsetsU, levelGJ, levelParamsU, partnerPartU, termParamsU, transitionUncertainties, uOf } from "./fieldUncertainty.js";
 import { formatDoubled } from "../physics/quantum.js";
 import type { LevelResult, LineResult, SpeciesResult } from "./types.js";
 import { quadraticPartners } from "./quadraticScope.js";
@@ -500,7 +501,10 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
           muB_h: val(c.muB_h),
         })
       : null;
-    return { atFields, hyperfine };
+    const hyperfineOffsetU = hyperfine
+      ? hyperfineOffsetsU(s.I2, { J2: u.J2, p: levelParamsU(u, inputs, true) }, { J2: l.J2, p: levelParamsU(l, inputs, true) }, lockPoints(hyperfine, null))
+      : undefined;
+    return { atFields, hyperfine, ...(hyperfineOffsetU ? { hyperfineOffsetU } : {}) };
   };
 
   return { levels, terms, termOf, lines: new Map(s.lines.map((ln) => [ln.input.id, lineResult(ln)])) };

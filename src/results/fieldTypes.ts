@@ -147,4 +147,10 @@ export interface LineFieldResult {
   atFields: LineAtFieldResult[];
   /** Weak-field hyperfine-resolved pattern (both levels with hyperfine structure), else null. */
   hyperfine: HyperfineLineGroup[] | null;
+  /**
+   * Standard uncertainty (Hz; null: exact) of each hyperfine group offset and
+   * lock point offset, by fieldUncertainty.lockKey(Fl2s, Fu2s); a group is the
+   * lock point with one F on each side.
+   */
+  hyperfineOffsetU?: Map<string, Dec | null>;
 }

@@ -26,7 +26,7 @@
  */
 import { Dec, ZERO } from "../physics/decimal.js";
 import { Rational } from "../physics/rational.js";
-import { derived, exact, minus, standardUncertainty, type Uncertain } from "../physics/uncertain.js";
+import { derived, exact, linear, minus, standardUncertainty, type Uncertain } from "../physics/uncertain.js";
 import { combine, linearSlopeSensitivity, NO_SENSITIVITY, type LevelSensitivity, type TermSensitivity } from "../physics/field/sensitivity.js";
 import type { HyperfineZeemanLevel } from "../physics/field/hyperfineZeeman.js";
 import type { SublevelLabel, SublevelTransition } from "../physics/field/sublevelTransitions.js";
@@ -184,4 +184,38 @@ export function transitionUncertainties(x: TransitionInputs, transitions: Sublev
       }),
     };
   });
+}
+
+/** Key of a hyperfine group or lock point by its doubled F values: "Fl,…|Fu,…". */
+export const lockKey = (Fl2: readonly number[], Fu2: readonly number[]): string => `${Fl2.join(",")}|${Fu2.join(",")}`;
+
+/**
+ * Uncertainty of every zero-field hyperfine group offset E_Fu − E_Fl (linear
+ * in A and B of both levels, hyperfine.ts) and of every crossover, the mean
+ * of its two groups' offsets (kept as uncertain numbers, so a shared A
+ * counts once), by lockKey. Exact coefficients; worked example: the 87Rb D2
+ * group F = 2 → F′ = 3 has offset 9A′/4 + B′/4 − 3A/4, so its u is
+ * √((9u(A′)/4)² + (u(B′)/4)² + (3u(A)/4)²).
+ */
+export function hyperfineOffsetsU(
+  I2: number, upper: { J2: number; p: LevelParamsU }, lower: { J2: number; p: LevelParamsU }, points: readonly { Fl2: number[]; Fu2: number[] }[],
+): Map<string, Dec | null> {
+  const shift = (lv: { J2: number; p: LevelParamsU }, F2: number, sign: number): [Dec, Uncertain][] => {
+    const { a, b } = hyperfineCoefficients(I2, lv.J2, F2);
+    return [[ratDec(a).mul(sign), lv.p.A], [ratDec(b).mul(sign), lv.p.B]];
+  };
+  const group = (Fl2: number, Fu2: number) => linear([...shift(upper, Fu2, 1), ...shift(lower, Fl2, -1)]);
+  const out = new Map<string, Dec | null>();
+  for (const pt of points) {
+    const combos = pt.Fl2.flatMap((l) => pt.Fu2.map((u) => group(l, u)));
+    const mean = linear(combos.map((g) => [new Dec(1).div(combos.length), g] as [Dec, Uncertain]));
+    out.set(lockKey(pt.Fl2, pt.Fu2), uOf(mean));
+  }
+  return out;
+}
+
+/** √(a² + b²) of two independent standard uncertainties (null: exact). */
+export function rss(a: Dec | null | undefined, b: Dec | null | undefined): Dec | null {
+  if (!a && !b) return null;
+  return (a ?? ZERO).pow(2).plus((b ?? ZERO).pow(2)).sqrt();
 }

@@ -8,6 +8,7 @@ import { lineCouplingNote } from "./couplingNote.js";
 import type { Dec } from "../physics/decimal.js";
 import { exportText } from "../physics/decimal.js";
 import { formatDoubled } from "../physics/quantum.js";
+import { lockKey, rss } from "../results/fieldUncertainty.js";
 import type { SpeciesResult } from "../results/types.js";
 import type { SpeciesFieldResult } from "../results/computeFields.js";
 import type { ConfiguredField, LevelFieldResult, LineFieldResult } from "../results/fieldTypes.js";
@@ -61,15 +62,15 @@ function levelFieldExport(f: LevelFieldResult, fields: ConfiguredField[]) {
       states: f.rows.map((r) => ({
         F: formatDoubled(r.F2),
         mF: formatDoubled(r.mF2),
-        E_Hz: num(r.energies[i]!),
+        ...withU("E_Hz", r.energies[i]!, r.energiesU?.[i]),
         high_field: { mJ: formatDoubled(r.highField.mJ2), mI: formatDoubled(r.highField.mI2) },
       })),
     })),
     quadratic: f.rows.map((r) => ({
       F: formatDoubled(r.F2),
       mF: formatDoubled(r.mF2),
-      Hz_per_T2: num(r.quadraticPerTesla2),
-      Hz_per_G2: r.quadraticPerTesla2 === null ? null : num(r.quadraticPerTesla2.mul("1e-8")),
+      ...withU("Hz_per_T2", r.quadraticPerTesla2, r.quadraticU),
+      ...withU("Hz_per_G2", r.quadraticPerTesla2 === null ? null : r.quadraticPerTesla2.mul("1e-8"), r.quadraticU ? r.quadraticU.mul("1e-8") : null),
       scope: f.quadratic.scope,
     })),
     quadratic_partners: f.quadratic.included,
@@ -81,16 +82,23 @@ function levelFieldExport(f: LevelFieldResult, fields: ConfiguredField[]) {
           paschen_back_scale_T: num(f.validity.paschenBackTesla),
         }
       : null,
-    sublevel_transitions: f.transitions.map((t) => ({
-      lower: { F: formatDoubled(t.lower.F2), mF: formatDoubled(t.lower.mF2) },
-      upper: { F: formatDoubled(t.upper.F2), mF: formatDoubled(t.upper.mF2) },
-      kind: t.kind,
-      zero_field_Hz: num(t.zeroFieldHz),
-      first_order_Hz_per_T: num(t.firstOrder.hzPerTesla),
-      second_order_Hz_per_T2: t.secondOrder ? num(t.secondOrder.hzPerTesla2) : null,
-      at_fields: t.atFields.map((a) => ({ B_T: fieldText(a.tesla), Hz: num(a.hz) })),
-      field_insensitive: t.fieldInsensitive.map((p) => ({ B_T: num(p.tesla), Hz: num(p.hz) })),
-    })),
+    sublevel_transitions: f.transitions.map((t, k) => {
+      const u = f.transitionsU?.[k];
+      return {
+        lower: { F: formatDoubled(t.lower.F2), mF: formatDoubled(t.lower.mF2) },
+        upper: { F: formatDoubled(t.upper.F2), mF: formatDoubled(t.upper.mF2) },
+        kind: t.kind,
+        ...withU("zero_field_Hz", t.zeroFieldHz, u?.zeroFieldHz),
+        ...withU("first_order_Hz_per_T", t.firstOrder.hzPerTesla, u?.firstOrderHzPerTesla),
+        ...withU("second_order_Hz_per_T2", t.secondOrder ? t.secondOrder.hzPerTesla2 : null, u?.secondOrderHzPerTesla2),
+        at_fields: t.atFields.map((a, i) => ({ B_T: fieldText(a.tesla), ...withU("Hz", a.hz, u?.atFields[i]) })),
+        field_insensitive: t.fieldInsensitive.map((p, i) => {
+          const pu = u?.fieldInsensitive[i];
+          // an accidental B = 0 (first-order slopes cancelling for these inputs only) has no propagated uncertainty
+          return { ...withU("B_T", p.tesla, pu?.tesla), ...withU("Hz", p.hz, pu?.hz), ...(pu && !pu.propagated ? { uncertainty: "not propagated" } : {}) };
+        }),
+      };
+    }),
     field_insensitive_searched_up_to_T: num(f.insensitiveSearchTesla),
   };
 }
@@ -101,7 +109,9 @@ const absolute = (nu0: Dec | null, offset: Dec) => (nu0 === null ? null : absolu
 /** F values of a lock point: the shared level as a string, the pair as a two-element array. */
 const lockLevels = (F2: number[]) => (F2.length === 1 ? formatDoubled(F2[0]!) : F2.map(formatDoubled));
 
-function lineFieldExport(f: LineFieldResult, nu0: Dec | null) {
+function lineFieldExport(f: LineFieldResult, nu0: Dec | null, nu0U: Dec | null) {
+  // ν0 (from the wavelength) and the offsets share no input, so their uncertainties add in quadrature
+  const offU = (Fl2: number[], Fu2: number[]) => f.hyperfineOffsetU?.get(lockKey(Fl2, Fu2)) ?? null;
   return {
     at_fields: f.atFields.map((a) => ({
       B_T: fieldText(a.field.tesla),
@@ -114,8 +124,8 @@ function lineFieldExport(f: LineFieldResult, nu0: Dec | null) {
         delta_m: c.q,
         polarization: c.polarization,
         relative_strength: exportText(c.strength, 20),
-        shift_Hz: num(c.shiftHz),
-        frequency_Hz: num(absolute(nu0, c.shiftHz)),
+        ...withU("shift_Hz", c.shiftHz, c.shiftHzU),
+        ...withU("frequency_Hz", absolute(nu0, c.shiftHz), rss(c.shiftHzU, nu0U)),
       })),
     })),
     hyperfine_groups: f.hyperfine
@@ -123,8 +133,8 @@ function lineFieldExport(f: LineFieldResult, nu0: Dec | null) {
           F_upper: formatDoubled(g.Fu2),
           F_lower: formatDoubled(g.Fl2),
           strength: g.strength.toString(),
-          offset_Hz: num(g.offset),
-          frequency_Hz: num(absolute(nu0, g.offset)),
+          ...withU("offset_Hz", g.offset, offU([g.Fl2], [g.Fu2])),
+          ...withU("frequency_Hz", absolute(nu0, g.offset), rss(offU([g.Fl2], [g.Fu2]), nu0U)),
           vacuum_wavelength_m: nu0 === null ? null : num(vacuumWavelength(absoluteFrequency(nu0, g.offset), SPEED_OF_LIGHT)),
           components: g.components.map((c) => ({
             mF_upper: formatDoubled(c.mFu2),
@@ -141,8 +151,8 @@ function lineFieldExport(f: LineFieldResult, nu0: Dec | null) {
           kind: p.kind,
           F_lower: lockLevels(p.Fl2),
           F_upper: lockLevels(p.Fu2),
-          frequency_Hz: num(p.frequencyHz),
-          offset_Hz: num(p.offset),
+          ...withU("frequency_Hz", p.frequencyHz, rss(offU(p.Fl2, p.Fu2), nu0U)),
+          ...withU("offset_Hz", p.offset, offU(p.Fl2, p.Fu2)),
         }))
       : [],
   };
@@ -154,9 +164,9 @@ export function speciesExport(s: SpeciesResult, ctx: ExportContext, fields?: { r
     const f = fields?.result.levels.get(levelId);
     return f && fields ? levelFieldExport(f, fields.configured) : {};
   };
-  const lineExtra = (lineId: string, nu0: Dec | null) => {
+  const lineExtra = (lineId: string, nu0: Dec | null, nu0U: Dec | null = null) => {
     const f = fields?.result.lines.get(lineId);
-    return f ? lineFieldExport(f, nu0) : {};
+    return f ? lineFieldExport(f, nu0, nu0U) : {};
   };
   return {
     format: EXPORT_FORMAT,
@@ -222,7 +232,7 @@ export function speciesExport(s: SpeciesResult, ctx: ExportContext, fields?: { r
         const sep = sigmaCentroidSeparation(ln, b.tesla);
         return { B_T: fieldText(b.tesla), B_text: b.text, ...withU("centroid_separation_pm", sep?.mul(PM) ?? null, sigmaSeparationU(ln, b.tesla)?.mul(PM)) };
       }),
-      ...lineExtra(ln.input.id, ln.frequencyHz),
+      ...lineExtra(ln.input.id, ln.frequencyHz, ln.frequencyHzU),
     })),
   };
 }

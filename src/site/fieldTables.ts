@@ -23,11 +23,12 @@ import {
   termStateAnchor,
   transitionAnchor,
 } from "./anchors.js";
-import { formatNumber, polarizationSymbol, termText, transitionKindLabel } from "./format.js";
+import { formatNumber, formatUncertain, polarizationSymbol, termText, transitionKindLabel } from "./format.js";
+import { rss } from "../results/fieldUncertainty.js";
 import { fieldPlotSvg } from "./plots/fieldPlot.js";
 import { stickPlotSvg } from "./plots/stickPlot.js";
 import { csvName, safeFile, type TableHome } from "./linearTables.js";
-import { fractionCell, numberCell, quantumCell, textCell, type Table } from "./table.js";
+import { fractionCell, numberCell, quantumCell, textCell, uncertainCell, type Table } from "./table.js";
 import { makeTable } from "./tableSpec.js";
 import { airWavelengthOfCell, frequencyCell, wavelengthCell } from "./lockTables.js";
 import { absoluteFrequency } from "../physics/lockPoints.js";
@@ -69,11 +70,11 @@ export function energiesTable(l: LevelResult, f: LevelFieldResult, fields: Confi
         {
           // levels without nuclear spin have no full table: their coefficient goes into the short one
           key: "quad", label: `quadratic${QUAD_SCOPE[f.quadratic.scope]}`, unit: "Hz/G²", kind: "number", when: full === hasHf,
-          cell: (r) => numberCell(r.quadraticPerTesla2 === null ? null : r.quadraticPerTesla2.mul("1e-8"), 7),
+          cell: (r) => uncertainCell(r.quadraticPerTesla2 === null ? null : r.quadraticPerTesla2.mul("1e-8"), r.quadraticU ? r.quadraticU.mul("1e-8") : null, 7),
         },
         ...fields.map((b, i) => ({
           key: `E${i}`, label: `E at ${b.text}`, unit: "MHz", kind: "number" as const,
-          cell: (r: FieldRow) => numberCell(r.energies[i]!.div(MHZ), 12),
+          cell: (r: FieldRow) => uncertainCell(r.energies[i]!.div(MHZ), r.energiesU?.[i]?.div(MHZ) ?? null, 12),
         })),
       ],
     },
@@ -170,6 +171,16 @@ export function transitionsTable(
   if (rows.length === 0) return null;
   const lid = l.input.id;
   const positive = fields.filter((b) => b.tesla.gt(0));
+  // standard uncertainties (results/fieldUncertainty.ts), by transition
+  const uOf = new Map(f.transitions.map((t, k) => [t, f.transitionsU?.[k]]));
+  const scaled = (x: Dec | null | undefined, k: string | Dec) => (x ? x.mul(k) : null);
+  const pointText = (t: SublevelTransition, k: number) => {
+    const p = t.fieldInsensitive[k]!;
+    const pu = uOf.get(t)?.fieldInsensitive[k];
+    const hz = `${formatUncertain(p.hz.div(MHZ), scaled(pu?.hz, new Dec(1).div(MHZ)), 12)} MHz`;
+    const where = p.tesla.gt(0) && p.tesla.lt("0.1") ? `${formatUncertain(p.tesla.div(GAUSS), scaled(pu?.tesla, new Dec(1).div(GAUSS)), 7)} G` : fieldText(p.tesla, 7);
+    return `${where} (${hz})${pu && !pu.propagated ? " (uncertainty not propagated)" : ""}`;
+  };
   return makeTable<SublevelTransition>(
     {
       id: lowerF2 === undefined ? `rf:${lid}` : `rf:${lid}:F=${formatDoubled(lowerF2)}`,
@@ -180,22 +191,25 @@ export function transitionsTable(
       columns: [
         { key: "lower", label: "lower (F, mF)", kind: "text", cell: (t) => textCell(stateText(t.lower.F2, t.lower.mF2)) },
         { key: "upper", label: "upper (F, mF)", kind: "text", cell: (t) => textCell(stateText(t.upper.F2, t.upper.mF2)) },
-        { key: "f0", label: "f at 0 G", unit: "MHz", kind: "number", cell: (t) => numberCell(t.zeroFieldHz.div(MHZ), 12) },
+        { key: "f0", label: "f at 0 G", unit: "MHz", kind: "number", cell: (t) => uncertainCell(t.zeroFieldHz.div(MHZ), scaled(uOf.get(t)?.zeroFieldHz, new Dec(1).div(MHZ)), 12) },
         {
           key: "insensitive", label: "field-insensitive at", kind: "text",
           cell: (t) =>
             textCell(
               t.fieldInsensitive.length === 0
                 ? `none below ${fieldText(f.insensitiveSearchTesla)}`
-                : t.fieldInsensitive.map((p) => `${fieldText(p.tesla, 7)} (${formatNumber(p.hz.div(MHZ), 12)} MHz)`).join("; "),
+                : t.fieldInsensitive.map((_, k) => pointText(t, k)).join("; "),
             ),
         },
         { key: "kind", label: "kind", kind: "text", cell: (t) => textCell(transitionKindLabel(t.kind)) },
-        { key: "d1", label: "df/dB", unit: "kHz/G", kind: "number", cell: (t) => numberCell(t.firstOrder.hzPerGauss.div("1e3"), 9) },
-        { key: "d2", label: "d²f/dB² ÷ 2", unit: "Hz/G²", kind: "number", cell: (t) => numberCell(t.secondOrder ? t.secondOrder.hzPerGauss2 : null, 7) },
+        { key: "d1", label: "df/dB", unit: "kHz/G", kind: "number", cell: (t) => uncertainCell(t.firstOrder.hzPerGauss.div("1e3"), scaled(uOf.get(t)?.firstOrderHzPerTesla, "1e-7"), 9) },
+        { key: "d2", label: "d²f/dB² ÷ 2", unit: "Hz/G²", kind: "number", cell: (t) => uncertainCell(t.secondOrder ? t.secondOrder.hzPerGauss2 : null, scaled(uOf.get(t)?.secondOrderHzPerTesla2, "1e-8"), 7) },
         ...positive.map((b, i) => ({
           key: `f${i}`, label: `f at ${b.text}`, unit: "MHz", kind: "number" as const,
-          cell: (t: SublevelTransition) => numberCell(t.atFields.filter((a) => a.tesla.gt(0))[i]!.hz.div(MHZ), 12),
+          cell: (t: SublevelTransition) => {
+            const at = t.atFields.findIndex((a) => a === t.atFields.filter((x) => x.tesla.gt(0))[i]);
+            return uncertainCell(t.atFields[at]!.hz.div(MHZ), scaled(uOf.get(t)?.atFields[at], new Dec(1).div(MHZ)), 12);
+          },
         })),
       ],
     },
@@ -316,8 +330,8 @@ export function atFieldTable(ln: LineResult, a: LineAtFieldResult, home: TableHo
         { key: "lower", label: "lower state", kind: "text", cell: (c) => textCell(c.lowerLabel.replace(/-/g, "−")) },
         { key: "pol", label: "polarization", kind: "text", cell: (c) => textCell(polarizationSymbol(c.polarization, c.q)) },
         { key: "strength", label: "relative strength", kind: "number", cell: (c) => numberCell(c.strength, 6) },
-        { key: "shift", label: "shift from line centre", unit: "MHz", kind: "number", cell: (c) => numberCell(c.shiftHz.div(MHZ), 10) },
-        { key: "nu", label: "frequency", unit: "THz", kind: "number", when: ln.frequencyHz !== null, cell: (c) => frequencyCell(absoluteFrequency(ln.frequencyHz!, c.shiftHz)) },
+        { key: "shift", label: "shift from line centre", unit: "MHz", kind: "number", cell: (c) => uncertainCell(c.shiftHz.div(MHZ), c.shiftHzU ? c.shiftHzU.div(MHZ) : null, 10) },
+        { key: "nu", label: "frequency", unit: "THz", kind: "number", when: ln.frequencyHz !== null, cell: (c) => frequencyCell(absoluteFrequency(ln.frequencyHz!, c.shiftHz), rss(c.shiftHzU, ln.frequencyHzU)) },
         {
           key: "dl", label: "wavelength shift", unit: "pm", kind: "number",
           cell: (c) => numberCell(wavelength && ln.frequencyHz ? c.shiftHz.neg().mul(wavelength.si).div(ln.frequencyHz).mul("1e12") : null, 6),

@@ -17,7 +17,7 @@ import { formatQuantum } from "./format.js";
 import { csvName, type TableHome } from "./linearTables.js";
 import { offsetFrom } from "./lockOffsets.js";
 import { partsText } from "./plainFormat.js";
-import { fractionCell, numberCell, textCell, type Cell, type Table } from "./table.js";
+import { fractionCell, numberCell, textCell, uncertainCell, type Cell, type Table } from "./table.js";
 import { makeTable } from "./tableSpec.js";
 
 const THZ = new Dec("1e12");
@@ -35,8 +35,9 @@ export function absoluteDigits(hz: Dec): number {
   return intDigits + 9;
 }
 
-/** An absolute frequency in THz, to 1 kHz. */
-export const frequencyCell = (hz: Dec | null): Cell => numberCell(hz === null ? null : hz.div(THZ), hz === null ? 1 : absoluteDigits(hz));
+/** An absolute frequency in THz, to 1 kHz, with its standard uncertainty `u` (Hz) in the concise form when given. */
+export const frequencyCell = (hz: Dec | null, u: Dec | null = null): Cell =>
+  uncertainCell(hz === null ? null : hz.div(THZ), u === null ? null : u.div(THZ), hz === null ? 1 : absoluteDigits(hz));
 
 /** A vacuum wavelength c/ν in nm, with as many significant digits as the frequency beside it. */
 /**

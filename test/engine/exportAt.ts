@@ -10,7 +10,7 @@ export type ExactAnswer = Omit<AtResult<string>, "B_T">;
 interface ExportLevel {
   id: string;
   field_table: { states: ExactAnswer["levels"][number]["states"] }[];
-  sublevel_transitions: { lower: { F: string; mF: string }; upper: { F: string; mF: string }; kind: "magnetic-dipole" | "two-photon"; at_fields: { Hz: string }[] }[];
+  sublevel_transitions: { lower: { F: string; mF: string }; upper: { F: string; mF: string }; kind: "magnetic-dipole" | "two-photon"; at_fields: { Hz: string; Hz_u: string | null }[] }[];
 }
 interface ExportLine {
   id: string;
@@ -24,7 +24,7 @@ export function exportAt(exp: { levels: unknown[]; lines: unknown[] }, i: number
   return {
     levels: levels.map((l) => ({ id: l.id, states: l.field_table[i]!.states })),
     transitions: levels.flatMap((l) =>
-      l.sublevel_transitions.map((t) => ({ level: l.id, lower: t.lower, upper: t.upper, kind: t.kind, Hz: t.at_fields[i]!.Hz })),
+      l.sublevel_transitions.map((t) => ({ level: l.id, lower: t.lower, upper: t.upper, kind: t.kind, Hz: t.at_fields[i]!.Hz, Hz_u: t.at_fields[i]!.Hz_u })),
     ),
     lines: lines.map((ln) => {
       const a = ln.at_fields[i]!;
