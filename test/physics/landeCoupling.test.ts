@@ -1,4 +1,7 @@
+import { readFileSync } from "node:fs";
+import { join } from "node:path";
 import { describe, expect, it } from "vitest";
+import { Rational } from "../../src/physics/rational.js";
 import { Dec } from "../../src/physics/decimal.js";
 import { landeExact, landeJJ, landeJJExact, landeJK, landeJKExact, type JJLevel, type JKLevel } from "../../src/physics/lande.js";
 
@@ -94,5 +97,35 @@ describe("landeJJ", () => {
   it("gives a J = 0 level no g", () => {
     // common practice: J = 0 has no magnetic moment.
     expect(landeJJ(jj(1, 1, 1, 1, 0), new Dec(1), new Dec(2))).toBeNull();
+  });
+});
+
+// sympy.physics.quantum.cg: each level's stretched state built from Clebsch–Gordan
+// coefficients in the uncoupled basis, g = cL·gL + cS·gS read off exactly
+// (scripts/fixtures/lande_coupling_sympy.py), independent of the projection rule.
+type FixtureCase =
+  | ({ scheme: "jK"; cL: string; cS: string } & JKLevel)
+  | ({ scheme: "jj"; cL: string; cS: string } & JJLevel);
+const fixture = JSON.parse(readFileSync(join(import.meta.dirname, "..", "fixtures", "lande-coupling-sympy.json"), "utf8")) as { cases: FixtureCase[] };
+
+describe("jK and jj Landé factors against sympy's explicit states", () => {
+  it("covers both schemes with many levels", () => {
+    expect(fixture.cases.filter((c) => c.scheme === "jK").length).toBeGreaterThan(50);
+    expect(fixture.cases.filter((c) => c.scheme === "jj").length).toBeGreaterThan(50);
+  });
+
+  it("gives every level's gL and gS coefficients and its exact value as sympy does", () => {
+    const one = new Dec(1);
+    const zero = new Dec(0);
+    for (const c of fixture.cases) {
+      const g = (gL: Dec, gS: Dec) => (c.scheme === "jK" ? landeJK(c, gL, gS) : landeJJ(c, gL, gS))!;
+      const exact = c.scheme === "jK" ? landeJKExact(c) : landeJJExact(c);
+      const cL = Rational.parse(c.cL);
+      const cS = Rational.parse(c.cS);
+      const what = JSON.stringify(c);
+      expect(g(one, zero).toSignificantDigits(40).eq(cL.toDecimal().toSignificantDigits(40)), what).toBe(true);
+      expect(g(zero, one).toSignificantDigits(40).eq(cS.toDecimal().toSignificantDigits(40)), what).toBe(true);
+      expect(exact!.toString(), what).toBe(cL.add(cS.mul(Rational.of(2))).toString());
+    }
   });
 });
