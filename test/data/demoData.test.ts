@@ -22,6 +22,18 @@ describe("demo data", () => {
     expect(p.source).toMatch(/from memory/);
   });
 
+  it("has 87Rb 5²S1/2 A = 3417.341305452145(45) MHz and 5²P3/2 A = 84.7185(20) MHz, B = 12.4965(37) MHz, each uncertainty marked as recalled", () => {
+    const s = level("rb87", "5s-S1/2");
+    // 3417.341305452145(45) MHz (from memory: D. A. Steck, "Rubidium 87 D Line Data")
+    expect(s.hyperfine!.A.siUncertainty!.toString()).toBe("0.000045");
+    expect(s.source).toMatch(/from memory/);
+    const p = level("rb87", "5p-P3/2");
+    // 84.7185(20) MHz and 12.4965(37) MHz (from memory: the same handbook)
+    expect(p.hyperfine!.A.siUncertainty!.toString()).toBe("2000");
+    expect(p.hyperfine!.B!.siUncertainty!.toString()).toBe("3700");
+    expect(p.source).toMatch(/from memory/);
+  });
+
   it("has 23Na 3²S1/2 gJ = 2.0022960(14)", () => {
     const g = level("na23", "3s-S1/2").gJ!;
     // 2.0022960(14) (from memory: D. A. Steck, "Sodium D Line Data", the handbook the file cites)

@@ -16,7 +16,7 @@ import { computeFrom } from "./speciesFrom.js";
 interface Stat { std: number; mean_deviation: number }
 const MC = JSON.parse(readFileSync(new URL("../fixtures/field/uncertainty-mc.json", import.meta.url), "utf8")) as Record<string, Stat & Record<string, unknown>>;
 
-// The demo's 87Rb ground state (data/species/rb87.yaml): D. A. Steck, "Rubidium 87 D Line Data"
+// The demo's 87Rb ground state (data/species/rb87.yaml): D. A. Steck, "Rubidium 87 D Line Data" (u(A) from memory)
 const RB = `id: rb87
 label: "87Rb"
 mass: "86.909180531 u"
@@ -26,7 +26,7 @@ levels:
     config: 5s
     term: 2S1/2
     gJ: "2.00233113(20)"
-    hyperfine: { A: "3417.341305452145 MHz" }
+    hyperfine: { A: "3417.341305452145(45) MHz" }
     source: "test input"
 `;
 
@@ -94,9 +94,12 @@ describe("field-dependent uncertainties against the Monte Carlo fixture (87Rb 5�
     expect(Math.abs(u.firstOrderHzPerTesla!.toNumber() - hand) / hand).toBeLessThan(1e-12);
   });
 
-  it("marks B = 0 of the clock line as an exact field-insensitive point (its first-order sensitivity is 0 for every gJ, gI)", () => {
+  it("marks B = 0 of the clock line as an exact field-insensitive point (its first-order sensitivity is 0 for every gJ, gI) whose frequency 2A carries u = 2·u(A)", () => {
     const { t, u } = find([4, 0], [2, 0]);
     expect(t.fieldInsensitive[0]!.tesla.isZero()).toBe(true);
-    expect(u.fieldInsensitive[0]).toEqual({ tesla: null, hz: null, propagated: true });
+    expect(u.fieldInsensitive[0]!.tesla).toBeNull();
+    expect(u.fieldInsensitive[0]!.propagated).toBe(true);
+    // hand formula: the zero-field splitting of I = 3/2, J = 1/2 is A(I + 1/2) = 2A (textbook), u(A) = 45 µHz (Steck, from memory)
+    expect(u.fieldInsensitive[0]!.hz!.toString()).toBe("0.00009");
   });
 });

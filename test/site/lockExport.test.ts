@@ -110,7 +110,7 @@ describe("lock points", () => {
     for (const p of lp) {
       const pair = [p.F_lower, p.F_upper].filter(Array.isArray);
       expect(pair.length, JSON.stringify(p)).toBe(p.kind === "crossover" ? 1 : 0);
-      expect(Object.keys(p).sort()).toEqual(["F_lower", "F_upper", "frequency_Hz", "kind", "offset_Hz"]);
+      expect(Object.keys(p).sort()).toEqual(["F_lower", "F_upper", "frequency_Hz", "frequency_Hz_u", "kind", "offset_Hz", "offset_Hz_u"]);
     }
     // 6 transitions, 6 crossovers sharing a ground level, 2 sharing an excited level (common practice for 87Rb D2)
     expect(lp.filter((p) => p.kind === "transition")).toHaveLength(6);
@@ -124,6 +124,20 @@ describe("lock points", () => {
     // from memory: Steck, "Rubidium 87 D Line Data": the crossover lies 133.3 MHz below the cycling transition
     expect(below.sub("133.3").abs().lt("0.05")).toBe(true);
     for (let i = 1; i < lp.length; i++) expect(dec(lp[i]!.frequency_Hz).gte(lp[i - 1]!.frequency_Hz)).toBe(true);
+  });
+
+  it("give F = 2 → F′ = 3 of D2 the offset uncertainty √((9u(A′)/4)² + (u(B′)/4)² + (3u(A)/4)²), and a crossover the mean of its groups' offsets with A shared", () => {
+    const lp = line(rb, "D2").lock_points as Json[];
+    // Steck, "Rubidium 87 D Line Data" (uncertainties from memory): u(A′) = 2.0 kHz, u(B′) = 3.7 kHz, u(A) = 45 µHz;
+    // E_F = A K/2 + B(…) (textbook Casimir formula): E(F′ = 3) = 9A′/4 + B′/4, E(F = 2) = 3A/4
+    const hand = (x: string, y: string, z: string) => dec(x).pow(2).add(dec(y).pow(2)).add(dec(z).pow(2)).sqrt();
+    const cycling = lp.find((p) => p.kind === "transition" && p.F_lower === "2" && p.F_upper === "3")!;
+    expect(dec(cycling.offset_Hz_u).sub(hand("4500", "925", "0.00003375")).abs().lt("1e-20")).toBe(true);
+    // crossover F = 2 → F′ = 2/3: the mean of 2→2 and 2→3, E(F′ = 2) = −3A′/4 − 3B′/4 (Casimir formula): (3A′/4 − B′/4) − 3A/4
+    const cross = lp.find((p) => p.kind === "crossover" && p.F_lower === "2" && String(p.F_upper) === "2,3")!;
+    expect(dec(cross.offset_Hz_u).sub(hand("1500", "925", "0.00003375")).abs().lt("1e-20")).toBe(true);
+    // the demo's D2 wavelength has no uncertainty, so the absolute frequency carries the offset's alone
+    expect(cycling.frequency_Hz_u).toBe(cycling.offset_Hz_u);
   });
 
   it("keep their offsets from the line centre without a wavelength", () => {
