@@ -47,6 +47,10 @@ export const PHRASES: readonly (readonly [RegExp, string])[] = [
   [/(?<![\p{L}\d])magic[\s-]+fields?(?![\p{L}\d])/gu, "magic"],
   [/(?<![\p{L}\d])clock[\s-]+transitions?(?![\p{L}\d])/gu, "clock"],
   [/(?<![\p{L}\d])0\s*[–-]\s*0(?![\p{L}\d])/gu, "0-0"],
+  // multipoles by name, to the line's multipole token (lines index theirs as "e2", "m2", "e3")
+  [/(?<![\p{L}\d])electric[\s-]+quadrupole(?![\p{L}\d])/gu, "e2"],
+  [/(?<![\p{L}\d])magnetic[\s-]+quadrupole(?![\p{L}\d])/gu, "m2"],
+  [/(?<![\p{L}\d])(?:electric[\s-]+)?octupole(?![\p{L}\d])/gu, "e3"],
 ];
 
 /**

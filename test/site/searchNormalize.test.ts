@@ -62,6 +62,10 @@ describe("search normalization", () => {
     expect(searchTokens("field insensitive")).toEqual(["field-insensitive"]);
     expect(searchTokens("two photon")).toEqual(["two-photon"]);
     expect(searchTokens("Rb clock transition")).toEqual(["rb", "clock"]);
+    // multipole names (common practice): E2 electric quadrupole, M2 magnetic quadrupole, E3 electric octupole
+    expect(searchTokens("Sr magnetic quadrupole")).toEqual(["sr", "m2"]);
+    expect(searchTokens("Yb+ octupole")).toEqual(["yb+", "e3"]);
+    expect(searchTokens("electric-quadrupole line")).toEqual(["e2", "line"]);
     expect(searchTokens("0–0")).toEqual(["0-0"]);
     // Words that only contain a phrase's letters are left alone.
     expect(searchTokens("sigmaplusx twophotons")).toEqual(["sigmaplusx", "twophotons"]);
