@@ -42,9 +42,9 @@ export interface ExportContext {
 
 const fieldText = (t: Dec) => exportText(t, EXPORT_DIGITS);
 
-/** `G` and `G_exact` of a line (null above rank 1). */
+/** `G` with its `G_u`, and `G_exact`, of a line (null above rank 1). */
 function secondOrderExport(s: ReturnType<typeof lineSecondOrder>) {
-  return { G: num(s.G), G_exact: s.GExact === null ? null : s.GExact.toString() };
+  return { ...withU("G", s.G, s.GU), G_exact: s.GExact === null ? null : s.GExact.toString() };
 }
 
 /** A component's angular factors seen along (θ = 0) and across (θ = 90°) the field, exact fractions. */

@@ -6,6 +6,7 @@
 import { readableDate } from "./format.js";
 import { relativeUrl } from "./relativeUrl.js";
 import { tableRowsHtml } from "./tableRows.js";
+import { uncertainProseHtml } from "./uncertainProse.js";
 import type { Table } from "./table.js";
 
 export const atlasFilters = {
@@ -15,6 +16,8 @@ export const atlasFilters = {
   toJson: (value: unknown): string => JSON.stringify(value),
   // The relative path from a page to the site root ("./", "../../"), for <body data-root> (finder links).
   rootPath: (pageUrl: string): string => relativeUrl("/index.html", pageUrl).replace(/index\.html$/, "") || "./",
+  // A sentence as HTML (output with | safe; escaped inside) with each concise uncertainty "(12)" in a span the page's switch hides.
+  uncertainProse: (text: string): string => uncertainProseHtml(text),
   // An ISO build date as people read it ("2 December 2026, 03:23 UTC"); the ISO form stays in <time datetime> and <meta>.
   readableDate: (iso: string): string => readableDate(iso),
 } as const;

@@ -10,7 +10,7 @@ import { hzPerTeslaToGHzPerTesla, hzPerTeslaToMHzPerGauss, hzPerTeslaToWavenumbe
 import { formatDoubled } from "../physics/quantum.js";
 import type { LineInput, Quantity } from "../data/model.js";
 import { pageSlug } from "../data/ids.js";
-import type { HyperfineLevelResult, LevelResult, LineResult, SpeciesResult } from "../results/types.js";
+import type { HyperfineLevelResult, LevelResult, LineResult, SpeciesResult, SublevelShift } from "../results/types.js";
 import { componentAnchor, hyperfineAnchor, levelAnchor, levelShiftsAnchor, lineAnchor, mFAnchor, mJAnchor } from "./anchors.js";
 import { formatQuantum, polarizationSymbol, termText, writtenDigits } from "./format.js";
 import { levelPagePath, linePagePath } from "./pageUrls.js";
@@ -75,10 +75,31 @@ export function quantityCell(q: Quantity | null | undefined, unit: string, siPer
   return numberCell(value, writtenDigits(numberText));
 }
 
+/**
+ * A line's wavelength in nm in one medium: the given one as written
+ * (quantityCell); the converted one with the given one's uncertainty
+ * carried over (data/speciesFile.ts) in the concise form when it has one.
+ */
+export function lineWavelengthCell(input: Pick<LineInput, "wavelength" | "airWavelength"> & Partial<Pick<LineInput, "medium">>, medium: LineInput["medium"]): Cell {
+  const q = medium === "air" ? input.airWavelength : input.wavelength;
+  if (!q || (input.medium ?? "vacuum") === medium || q.siUncertainty === null) return quantityCell(q, "nm", "1e-9");
+  return uncertainCell(q.si.div("1e-9"), q.siUncertainty.div("1e-9"), writtenDigits(q.text.trim().slice(0, q.text.trim().length - q.unit.length)));
+}
+
 /** A line's wavelength in standard air (given or converted), or the words saying the air formula does not reach it. */
-export function airWavelengthCell(input: Pick<LineInput, "wavelength" | "airWavelength">): Cell {
+export function airWavelengthCell(input: Pick<LineInput, "wavelength" | "airWavelength"> & Partial<Pick<LineInput, "medium">>): Cell {
   if (input.wavelength && !input.airWavelength) return textCell("outside the range of the air formula");
-  return quantityCell(input.airWavelength, "nm", "1e-9");
+  return lineWavelengthCell(input, "air");
+}
+
+/**
+ * Standard uncertainty (Hz/T) of the shift per unit m, g·μB/h: that of the
+ * stretched sublevel's shift g·(J or F)·μB/h (results/linearUncertainties.ts,
+ * same inputs) divided by J or F, an exact scaling. Null when exact.
+ */
+export function perUnitMU(sublevels: SublevelShift[], top2: number): Dec | null {
+  const u = sublevels.find((x) => x.m2 === top2)?.shiftHzPerTU;
+  return u ? u.mul(2).div(top2) : null;
 }
 
 /** Levels of a species; the id links to the level's own page where it has one, else to its shifts. */
@@ -204,7 +225,8 @@ export function glanceTable(s: SpeciesResult, home: TableHome, muB_h: Dec): Tabl
             const gv = g(r);
             if (gv === null) return numberCell(null);
             const hzPerT = gv.mul(muB_h);
-            return numberCell(hzPerTeslaToMHzPerGauss(hzPerT), SHOWN_DIGITS, { hzPerT: exportText(hzPerT, 30) });
+            const u = r.hf ? perUnitMU(r.hf.sublevels, r.hf.F2) : perUnitMU(r.level.sublevels, r.level.J2);
+            return uncertainCell(hzPerTeslaToMHzPerGauss(hzPerT), uIn(u, hzPerTeslaToMHzPerGauss), SHOWN_DIGITS, { hzPerT: exportText(hzPerT, 30) }, u ?? undefined);
           },
         },
         { key: "E0", label: "zero-field position", unit: "MHz", kind: "number", cell: (r) => uncertainCell(r.hf ? r.hf.zeroFieldHz.div(MHZ) : null, uIn(r.hf?.zeroFieldHzU, (x) => x.div(MHZ)), 12) },
@@ -228,7 +250,7 @@ export function linesTable(s: SpeciesResult, home: TableHome): Table {
         { key: "upper", label: "upper", kind: "text", cell: (ln) => textCell(ln.upper.input.id, `#${levelAnchor(ln.upper.input.id)}`) },
         { key: "lower", label: "lower", kind: "text", cell: (ln) => textCell(ln.lower.input.id, `#${levelAnchor(ln.lower.input.id)}`) },
         { key: "multipole", label: "multipole", kind: "text", cell: (ln) => textCell(ln.input.multipole) },
-        { key: "wavelength", label: "λ (vacuum)", unit: "nm", kind: "number", cell: (ln) => quantityCell(ln.input.wavelength, "nm", "1e-9") },
+        { key: "wavelength", label: "λ (vacuum)", unit: "nm", kind: "number", cell: (ln) => lineWavelengthCell(ln.input, "vacuum") },
         { key: "air_wavelength", label: "λ (air)", unit: "nm", kind: "number", when: s.lines.some((ln) => ln.input.wavelength), cell: (ln) => airWavelengthCell(ln.input) },
         { key: "g_eff", label: "g_eff", kind: "number", cell: (ln) => uncertainCell(ln.gEff, ln.gEffU ?? null, SHOWN_DIGITS) },
         { key: "pattern", label: "pattern", kind: "text", cell: (ln) => textCell(ln.pattern ?? "—") },

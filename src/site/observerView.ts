@@ -7,7 +7,7 @@
 import { angularFormulaText, circularSense } from "../physics/angularFactor.js";
 import { lineSecondOrder, viewFactors } from "../results/observation.js";
 import type { LineResult } from "../results/types.js";
-import { formatNumber } from "./format.js";
+import { formatUncertain } from "./format.js";
 import { csvName, safeFile, type TableHome } from "./linearTables.js";
 import { observerPlotSvg, type ObserverStick } from "./plots/observerPlot.js";
 import { textCell, type Table } from "./table.js";
@@ -58,7 +58,7 @@ export function observerView(ln: LineResult, home: TableHome): ObserverView {
   const gText =
     g.G === null
       ? `Second-order effective Landé factor G: ${g.GNote}.`
-      : `Second-order effective Landé factor G = ${formatNumber(g.G, 9)} from the g values in use (exact LS value ${g.GExact!.toString()}); ` +
+      : `Second-order effective Landé factor G = ${formatUncertain(g.G, g.GU, 9)} from the g values in use (exact LS value ${g.GExact!.toString()}); ` +
         `with g_eff it gives the weak-field polarization of the line: Stokes V ∝ g_eff·B, Q and U ∝ G·B² (Landi Degl'Innocenti and Landolfi 2004). ` +
         `G = g_eff² − (g_u − g_l)²(16s − 7d² − 4)/80, s = J_u(J_u+1) + J_l(J_l+1), d = J_u(J_u+1) − J_l(J_l+1); G = g_eff² when one level has J = 0.`;
   const qs = [...new Set(ln.components.map((c) => c.deltaM))].sort((a, b) => b - a);

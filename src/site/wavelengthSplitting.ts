@@ -9,9 +9,10 @@ import type { ConfiguredField } from "../results/fieldTypes.js";
 import type { LineResult } from "../results/types.js";
 import { lineDlambdaAnchor } from "./anchors.js";
 import { csvName, type TableHome } from "./linearTables.js";
-import { numberCell, textCell, type Table } from "./table.js";
+import { textCell, uncertainCell, type Table } from "./table.js";
 import { makeTable } from "./tableSpec.js";
-import { formatNumber } from "./format.js";
+import { formatUncertain } from "./format.js";
+import { sigmaSeparationU } from "../results/linearUncertainties.js";
 
 /** pm per m; 1 pm/T is also 1 mÅ/kG. */
 export const PM = "1e12";
@@ -29,14 +30,27 @@ export function sigmaCentroidSeparation(ln: Pick<LineResult, "gEff" | "lorentzDl
   return ln.gEff.abs().mul(2).mul(ln.lorentzDlambdaPerT).mul(tesla);
 }
 
+/**
+ * A wavelength in words: the given one as its data file writes it (with its
+ * own concise uncertainty, if any); the converted one with the given one's
+ * uncertainty carried over (data/speciesFile.ts) in the concise form, or its
+ * text when the given wavelength is exact.
+ */
+function shownWavelength(q: NonNullable<LineInput["wavelength"]>, asGiven: boolean): string {
+  if (asGiven || q.uncertainty === null) return q.text;
+  return `${formatUncertain(q.value, q.uncertainty)} ${q.unit}`;
+}
+
 /** Vacuum and air wavelengths of a line in words, for the line page under its heading; null without a wavelength. */
 export function wavelengthsText(input: LineInput): string | null {
   const vac = input.wavelength;
   if (!vac) return null;
   const given = (m: LineInput["medium"]) => (input.medium === m ? " (as given)" : "");
-  const vacText = `${vac.text} in vacuum${given("vacuum")}`;
+  const vacText = `${shownWavelength(vac, input.medium === "vacuum")} in vacuum${given("vacuum")}`;
   const air = input.airWavelength;
-  return air ? `λ = ${vacText}, ${air.text} in standard air${given("air")}` : `λ = ${vacText}; in air: outside the range of the air formula (200 nm to 2 µm)`;
+  return air
+    ? `λ = ${vacText}, ${shownWavelength(air, input.medium === "air")} in standard air${given("air")}`
+    : `λ = ${vacText}; in air: outside the range of the air formula (200 nm to 2 µm)`;
 }
 
 /**
@@ -48,7 +62,9 @@ export function wavelengthSplitTable(ln: LineResult, fields: ConfiguredField[], 
   const perT = ln.lorentzDlambdaPerT;
   if (perT === null) return null;
   const rows = fields.filter((f) => f.tesla.gt(0));
-  const pm = (x: Dec | null) => (x === null ? null : x.mul(PM));
+  const pm = (x: Dec | null | undefined) => (x === null || x === undefined ? null : x.mul(PM));
+  const sigma = (f: ConfiguredField) => pm(sigmaCentroidSeparation(ln, f.tesla));
+  const sigmaU = (f: ConfiguredField) => pm(sigmaSeparationU(ln, f.tesla));
   return makeTable<ConfiguredField>(
     {
       id: `dlambda:${ln.input.id}`,
@@ -58,9 +74,9 @@ export function wavelengthSplitTable(ln: LineResult, fields: ConfiguredField[], 
       anchor: (f) => lineDlambdaAnchor(ln.input.id, exportText(f.tesla, 30)),
       columns: [
         { key: "B", label: "field", kind: "text", cell: (f) => textCell(f.text) },
-        { key: "lorentz", label: "one Lorentz unit", unit: "pm", kind: "number", cell: (f) => numberCell(pm(perT.mul(f.tesla)), 6) },
-        { key: "sigma", label: "σ+ to σ− centroids", unit: "pm", kind: "number", cell: (f) => numberCell(pm(sigmaCentroidSeparation(ln, f.tesla)), 6) },
-        { key: "sigmaA", label: "σ+ to σ− centroids", unit: "mÅ", kind: "number", cell: (f) => numberCell(pm(sigmaCentroidSeparation(ln, f.tesla))?.mul(10) ?? null, 6) },
+        { key: "lorentz", label: "one Lorentz unit", unit: "pm", kind: "number", cell: (f) => uncertainCell(pm(perT.mul(f.tesla)), pm(ln.lorentzDlambdaPerTU?.mul(f.tesla)), 6) },
+        { key: "sigma", label: "σ+ to σ− centroids", unit: "pm", kind: "number", cell: (f) => uncertainCell(sigma(f), sigmaU(f), 6) },
+        { key: "sigmaA", label: "σ+ to σ− centroids", unit: "mÅ", kind: "number", cell: (f) => uncertainCell(sigma(f)?.mul(10) ?? null, sigmaU(f)?.mul(10) ?? null, 6) },
       ],
     },
     rows,
@@ -71,10 +87,10 @@ export function wavelengthSplitTable(ln: LineResult, fields: ConfiguredField[], 
 export function lorentzWavelengthText(ln: LineResult): string | null {
   const perT = ln.lorentzDlambdaPerT;
   if (perT === null) return null;
-  const v = formatNumber(perT.mul(PM), 6);
+  const v = formatUncertain(perT.mul(PM), ln.lorentzDlambdaPerTU?.mul(PM) ?? null, 6);
   const sigma =
     ln.gEff === null
       ? ""
-      : ` The σ+ and σ− components' strength-weighted centroids lie 2·|g_eff| = ${formatNumber(ln.gEff.abs().mul(2), 6)} Lorentz units apart (linear pattern, hyperfine structure not resolved).`;
+      : ` The σ+ and σ− components' strength-weighted centroids lie 2·|g_eff| = ${formatUncertain(ln.gEff.abs().mul(2), ln.gEffU?.mul(2) ?? null, 6)} Lorentz units apart (linear pattern, hyperfine structure not resolved).`;
   return `A shift of one Lorentz unit (μB·B/h) moves the line by ${v} pm/T = ${v} mÅ/kG in wavelength (λ²·μB/(hc) with the vacuum wavelength; in air smaller by the factor n, 3 × 10⁻⁴); toward shorter wavelength for a positive shift.${sigma}`;
 }

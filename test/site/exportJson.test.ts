@@ -156,6 +156,8 @@ describe("what the observer sees, in the export", () => {
     expect(d2.G.startsWith("1.34038823204699999999999999")).toBe(true);
     // by hand from the D2 components (as Na D2): 13/9 − 1/9
     expect(d2.G_exact).toBe("4/3");
+    // both g values are given without an uncertainty here, so G has none (README, "Uncertainties")
+    expect(d2).toHaveProperty("G_u", null);
   });
 
   it("gives each component its exact angular factors along and across the field", () => {
@@ -171,6 +173,7 @@ describe("what the observer sees, in the export", () => {
     const e2 = exportOf("ca40-ion").lines[0];
     expect(e2.G).toBeNull();
     expect(e2.G_exact).toBeNull();
+    expect(e2).toHaveProperty("G_u", null);
     // textbook E2: q = 0 3 sin²θ cos²θ, |q| = 1 (cos²θ + cos²2θ)/2, |q| = 2 (1 − cos⁴θ)/2
     expect(e2.angular_coefficients).toEqual({ "0": ["0", "3", "-3"], "1": ["1/2", "-3/2", "2"], "2": ["1/2", "0", "-1/2"] });
     const q2 = e2.components.find((c: { delta_m: number }) => c.delta_m === 2);
