@@ -102,7 +102,7 @@ describe.skipIf(!hasChromium)("table filter and sort in the browser", () => {
 
   it("sorts fractions by their decimal keys and keeps empty cells last in both directions", async () => {
     let page = await open("species/sr88/");
-    // sr88's levels table: "gJ (LS, exact)" is a fraction, "—" for the J = 0 levels 1S0 and 3P0.
+    // sr88's levels table: "gJ exact (gL = 1, gS = 2)" is a fraction, "—" for the J = 0 levels 1S0 and 3P0.
     const col = await page.locator("#table-levels thead th").evaluateAll((ths) => ths.findIndex((th) => th.classList.contains("k-fraction")));
     const keys = await columnKeys(page, "table-levels", col);
     expect(keys.filter((k) => k === "").length).toBe(2);
