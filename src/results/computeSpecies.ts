@@ -69,7 +69,7 @@ function computeLevel(level: LevelInput, gL: Dec, gS: Dec, I2: number, gI: Dec |
 }
 
 /** The coupling formula computeLevel uses, as linearUncertainties.ts takes it: a level's g from gL and gS. */
-export const levelLande: LevelLande = (level, gL, gS) => landeLS(level.term.S2, level.term.L, level.term.J2, gL, gS);
+export const levelLande: LevelLande = (level, gL, gS) => couplingLande(level.term, gL, gS).g;
 
 export function computeSpecies(species: SpeciesInput, c: ConstantsEdition): SpeciesResult {
   const muB_h = val(c.muB_h);
