@@ -45,7 +45,7 @@ import { lockPoints } from "../physics/lockPoints.js";
 import { insensitivePointSensitivity, quadraticSensitivity, stateSensitivity, termInsensitivePointSensitivity, termStateSensitivity } from "../physics/field/sensitivity.js";
 import { derived, exact, minus, plus, type Uncertain } from "../physics/uncertain.js";
 import { speciesInputs, type SpeciesInputs } from "./inputUncertainties.js";
-import { fromLevelSensitivity, fromTermSensitivity, hyperfineOffsetsU, levelGJ, levelParamsU, partnerPartU, termParamsU, transitionUncertainties, uOf } from "./fieldUncertainty.js";
+import { fromLevelSensitivity, fromTermSensitivity, hyperfineGroupsU, hyperfineOffsetsU, levelGJ, levelParamsU, partnerPartU, termParamsU, transitionUncertainties, uOf } from "./fieldUncertainty.js";
 import { formatDoubled } from "../physics/quantum.js";
 import type { LevelResult, LineResult, SpeciesResult } from "./types.js";
 import { quadraticPartners } from "./quadraticScope.js";
@@ -504,7 +504,10 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
     const hyperfineOffsetU = hyperfine
       ? hyperfineOffsetsU(s.I2, { J2: u.J2, p: levelParamsU(u, inputs, true) }, { J2: l.J2, p: levelParamsU(l, inputs, true) }, lockPoints(hyperfine, null))
       : undefined;
-    return { atFields, hyperfine, ...(hyperfineOffsetU ? { hyperfineOffsetU } : {}) };
+    const hyperfineU = hyperfine
+      ? hyperfineGroupsU(s.I2, inputs.gI ?? exact(ZERO), { J2: u.J2, gJ: levelGJ(u, inputs) }, { J2: l.J2, gJ: levelGJ(l, inputs) }, inputs.muB_h, hyperfine)
+      : undefined;
+    return { atFields, hyperfine, ...(hyperfineOffsetU ? { hyperfineOffsetU } : {}), ...(hyperfineU ? { hyperfineU } : {}) };
   };
 
   return { levels, terms, termOf, lines: new Map(s.lines.map((ln) => [ln.input.id, lineResult(ln)])) };

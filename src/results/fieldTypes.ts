@@ -9,6 +9,7 @@ import type { SublevelTransition } from "../physics/field/sublevelTransitions.js
 import type { FineStructureState, LinearLimit, SpinOrbitFit } from "../physics/field/fineStructure.js";
 import type { HyperfineLineGroup } from "../physics/hyperfineLines.js";
 import type { ReducedElementKind } from "../physics/field/lineAtField.js";
+import type { HyperfineGroupU } from "./fieldUncertainty.js";
 import type { Polarization } from "../physics/linePattern.js";
 import type { QuadraticScope } from "./quadraticScope.js";
 
@@ -153,4 +154,6 @@ export interface LineFieldResult {
    * lock point with one F on each side.
    */
   hyperfineOffsetU?: Map<string, Dec | null>;
+  /** Standard uncertainties of each hyperfine group's gF values and components' shifts (Hz/T), in the order of `hyperfine`. */
+  hyperfineU?: HyperfineGroupU[];
 }

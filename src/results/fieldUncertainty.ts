@@ -26,11 +26,11 @@
  */
 import { Dec, ZERO } from "../physics/decimal.js";
 import { Rational } from "../physics/rational.js";
-import { derived, exact, linear, minus, standardUncertainty, type Uncertain } from "../physics/uncertain.js";
+import { derived, exact, linear, minus, standardUncertainty, times, type Uncertain } from "../physics/uncertain.js";
 import { combine, linearSlopeSensitivity, NO_SENSITIVITY, type LevelSensitivity, type TermSensitivity } from "../physics/field/sensitivity.js";
 import type { HyperfineZeemanLevel } from "../physics/field/hyperfineZeeman.js";
 import type { SublevelLabel, SublevelTransition } from "../physics/field/sublevelTransitions.js";
-import { hyperfineCoefficients } from "../physics/hyperfine.js";
+import { gF as hyperfineGOf, hyperfineCoefficients } from "../physics/hyperfine.js";
 import type { TransitionUncertainty } from "./fieldTypes.js";
 import { gJInUse, type SpeciesInputs } from "./inputUncertainties.js";
 import { couplingLande } from "./computeSpecies.js";
@@ -212,6 +212,49 @@ export function hyperfineOffsetsU(
     out.set(lockKey(pt.Fl2, pt.Fu2), uOf(mean));
   }
   return out;
+}
+
+/** Standard uncertainties of one hyperfine group's gF values and of its components' linear shifts. */
+export interface HyperfineGroupU {
+  gFu: Dec | null;
+  gFl: Dec | null;
+  /** u of shiftHzPerT, in the order of the group's components. */
+  shiftHzPerT: (Dec | null)[];
+}
+
+/**
+ * Uncertainties of the weak-field hyperfine pattern (hyperfineLines.ts):
+ * gF = wJ·gJ + wI·gI of both levels (Steck eq. 22; weights exact) and each
+ * component's shift (gF′·mF′ − gF·mF)·μB/h, built as uncertain numbers from
+ * the same gI and μB/h for both levels, so in a stretched component, where
+ * gI cancels from the shift, its contribution cancels too. Worked example: the 87Rb D2 cycling
+ * component (F = 2, mF = 2 → F′ = 3, mF′ = 3) has shift ((3/2)gJ′ − (1/2)gJ)·μB/h,
+ * so its u is μB/h·√((3u(gJ′)/2)² + (u(gJ)/2)²) to first order beside the
+ * μB/h part.
+ */
+export function hyperfineGroupsU(
+  I2: number, gI: Uncertain, upper: { J2: number; gJ: Uncertain }, lower: { J2: number; gJ: Uncertain }, muB_h: Uncertain,
+  groups: readonly { Fu2: number; Fl2: number; components: readonly { mFu2: number; mFl2: number }[] }[],
+): HyperfineGroupU[] {
+  const ONE = new Dec(1);
+  const gFOf = (lv: { J2: number; gJ: Uncertain }, F2: number): Uncertain | null => {
+    const wJ = hyperfineGOf(ONE, ZERO, I2, lv.J2, F2);
+    const wI = hyperfineGOf(ZERO, ONE, I2, lv.J2, F2);
+    return wJ === null || wI === null ? null : linear([[wJ, lv.gJ], [wI, gI]]);
+  };
+  return groups.map((g) => {
+    const gu = gFOf(upper, g.Fu2);
+    const gl = gFOf(lower, g.Fl2);
+    const part = (gf: Uncertain | null, m2: number): [Dec, Uncertain][] => (gf === null || m2 === 0 ? [] : [[new Dec(m2).div(2), gf]]);
+    return {
+      gFu: uOf(gu),
+      gFl: uOf(gl),
+      shiftHzPerT: g.components.map((c) => {
+        const lorentz = linear([...part(gu, c.mFu2), ...part(gl, c.mFl2).map(([k, x]) => [k.neg(), x] as [Dec, Uncertain])]);
+        return uOf(times(lorentz, muB_h));
+      }),
+    };
+  });
 }
 
 /** √(a² + b²) of two independent standard uncertainties (null: exact). */

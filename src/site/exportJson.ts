@@ -74,12 +74,15 @@ function levelFieldExport(f: LevelFieldResult, fields: ConfiguredField[]) {
       scope: f.quadratic.scope,
     })),
     quadratic_partners: f.quadratic.included,
+    // the limits of the linear regime are not propagated (README "Uncertainties"): their _u keys are null and say so;
+    // searched_up_to_T is a setting, not a derived number
     linear_validity: f.validity
       ? {
-          within_1_percent_up_to_T: num(f.validity.relative.tesla),
-          within_1_kHz_up_to_T: num(f.validity.absolute.tesla),
+          ...withU("within_1_percent_up_to_T", f.validity.relative.tesla, null),
+          ...withU("within_1_kHz_up_to_T", f.validity.absolute.tesla, null),
           searched_up_to_T: num(f.validity.maxTesla),
-          paschen_back_scale_T: num(f.validity.paschenBackTesla),
+          ...withU("paschen_back_scale_T", f.validity.paschenBackTesla, null),
+          uncertainty: "not propagated",
         }
       : null,
     sublevel_transitions: f.transitions.map((t, k) => {
@@ -129,20 +132,20 @@ function lineFieldExport(f: LineFieldResult, nu0: Dec | null, nu0U: Dec | null) 
       })),
     })),
     hyperfine_groups: f.hyperfine
-      ? f.hyperfine.map((g) => ({
+      ? f.hyperfine.map((g, gi) => ({
           F_upper: formatDoubled(g.Fu2),
           F_lower: formatDoubled(g.Fl2),
           strength: g.strength.toString(),
           ...withU("offset_Hz", g.offset, offU([g.Fl2], [g.Fu2])),
           ...withU("frequency_Hz", absolute(nu0, g.offset), rss(offU([g.Fl2], [g.Fu2]), nu0U)),
           vacuum_wavelength_m: nu0 === null ? null : num(vacuumWavelength(absoluteFrequency(nu0, g.offset), SPEED_OF_LIGHT)),
-          components: g.components.map((c) => ({
+          components: g.components.map((c, ci) => ({
             mF_upper: formatDoubled(c.mFu2),
             mF_lower: formatDoubled(c.mFl2),
             polarization: c.polarization,
             strength: c.strength.toString(),
             cycling: c.cycling,
-            shift_Hz_per_T: num(c.shiftHzPerT),
+            ...withU("shift_Hz_per_T", c.shiftHzPerT, f.hyperfineU?.[gi]?.shiftHzPerT[ci]),
           })),
         }))
       : [],

@@ -8,7 +8,7 @@ import { Dec, exportText } from "../physics/decimal.js";
 import { formatDoubled } from "../physics/quantum.js";
 import { isMagneticMultipole } from "../physics/linePattern.js";
 import { SPEED_OF_LIGHT } from "../physics/units.js";
-import type { ConfiguredField, FieldRow, LevelFieldResult, LineAtFieldResult, LineComponentAtField, TermFieldResult } from "../results/fieldTypes.js";
+import type { ConfiguredField, FieldRow, LevelFieldResult, LineAtFieldResult, LineComponentAtField, LineFieldResult, TermFieldResult } from "../results/fieldTypes.js";
 import type { HyperfineLineGroup } from "../physics/hyperfineLines.js";
 import type { SublevelTransition } from "../physics/field/sublevelTransitions.js";
 import type { FineStructureState } from "../physics/field/fineStructure.js";
@@ -24,7 +24,7 @@ import {
   transitionAnchor,
 } from "./anchors.js";
 import { formatNumber, formatUncertain, polarizationSymbol, termText, transitionKindLabel } from "./format.js";
-import { rss } from "../results/fieldUncertainty.js";
+import { lockKey, rss } from "../results/fieldUncertainty.js";
 import { fieldPlotSvg } from "./plots/fieldPlot.js";
 import { stickPlotSvg } from "./plots/stickPlot.js";
 import { csvName, safeFile, type TableHome } from "./linearTables.js";
@@ -194,12 +194,15 @@ export function transitionsTable(
         { key: "f0", label: "f at 0 G", unit: "MHz", kind: "number", cell: (t) => uncertainCell(t.zeroFieldHz.div(MHZ), scaled(uOf.get(t)?.zeroFieldHz, new Dec(1).div(MHZ)), 12) },
         {
           key: "insensitive", label: "field-insensitive at", kind: "text",
-          cell: (t) =>
-            textCell(
+          // the concise uncertainties inside the text are hideable by the page's switch (Cell.prose)
+          cell: (t) => ({
+            ...textCell(
               t.fieldInsensitive.length === 0
                 ? `none below ${fieldText(f.insensitiveSearchTesla)}`
                 : t.fieldInsensitive.map((_, k) => pointText(t, k)).join("; "),
             ),
+            prose: true,
+          }),
         },
         { key: "kind", label: "kind", kind: "text", cell: (t) => textCell(transitionKindLabel(t.kind)) },
         { key: "d1", label: "df/dB", unit: "kHz/G", kind: "number", cell: (t) => uncertainCell(t.firstOrder.hzPerGauss.div("1e3"), scaled(uOf.get(t)?.firstOrderHzPerTesla, "1e-7"), 9) },
@@ -257,10 +260,15 @@ export function termTable(t: TermFieldResult, fields: ConfiguredField[], home: T
 
 export { termAnchor };
 
-/** Hyperfine lines F → F′ of a line at low field. */
-export function hyperfineGroupsTable(ln: LineResult, groups: HyperfineLineGroup[], home: TableHome): Table {
+/** The uncertainties of a line's weak-field hyperfine pattern (computeFields; fieldUncertainty.ts), when known. */
+export type HyperfinePatternU = Pick<LineFieldResult, "hyperfineOffsetU" | "hyperfineU">;
+
+/** Hyperfine lines F → F′ of a line at low field, with the uncertainties of offsets, frequencies and gF in the concise form. */
+export function hyperfineGroupsTable(ln: LineResult, groups: HyperfineLineGroup[], home: TableHome, un: HyperfinePatternU = {}): Table {
   const id = ln.input.id;
   const nu0 = ln.frequencyHz;
+  const offU = (g: HyperfineLineGroup) => un.hyperfineOffsetU?.get(lockKey([g.Fl2], [g.Fu2])) ?? null;
+  const gU = (g: HyperfineLineGroup) => un.hyperfineU?.[groups.indexOf(g)];
   return makeTable<HyperfineLineGroup>(
     {
       id: `hfl:${id}`,
@@ -273,22 +281,22 @@ export function hyperfineGroupsTable(ln: LineResult, groups: HyperfineLineGroup[
         { key: "Fl", label: "F lower", kind: "quantum", cell: (g) => quantumCell(g.Fl2) },
         { key: "S", label: "strength (of line)", kind: "fraction", cell: (g) => fractionCell(g.strength) },
         { key: "Sl", label: "share of lower F", kind: "fraction", cell: (g) => fractionCell(g.shareOfLower) },
-        { key: "off", label: "offset from line centre", unit: "MHz", kind: "number", cell: (g) => numberCell(g.offset.div(MHZ), 10) },
-        { key: "nu", label: "frequency", unit: "THz", kind: "number", when: nu0 !== null, cell: (g) => frequencyCell(absoluteFrequency(nu0!, g.offset)) },
+        { key: "off", label: "offset from line centre", unit: "MHz", kind: "number", cell: (g) => uncertainCell(g.offset.div(MHZ), offU(g)?.div(MHZ) ?? null, 10) },
+        { key: "nu", label: "frequency", unit: "THz", kind: "number", when: nu0 !== null, cell: (g) => frequencyCell(absoluteFrequency(nu0!, g.offset), rss(offU(g), ln.frequencyHzU)) },
         { key: "lambda", label: "vacuum wavelength", unit: "nm", kind: "number", when: nu0 !== null, cell: (g) => wavelengthCell(absoluteFrequency(nu0!, g.offset)) },
         { key: "lambda_air", label: "air wavelength", unit: "nm", kind: "number", when: nu0 !== null, cell: (g) => airWavelengthOfCell(absoluteFrequency(nu0!, g.offset)) },
-        { key: "gFu", label: "gF upper", kind: "number", cell: (g) => numberCell(g.gFu, 9) },
-        { key: "gFl", label: "gF lower", kind: "number", cell: (g) => numberCell(g.gFl, 9) },
+        { key: "gFu", label: "gF upper", kind: "number", cell: (g) => uncertainCell(g.gFu, gU(g)?.gFu ?? null, 9) },
+        { key: "gFl", label: "gF lower", kind: "number", cell: (g) => uncertainCell(g.gFl, gU(g)?.gFl ?? null, 9) },
       ],
     },
     groups,
   );
 }
 
-/** Hyperfine Zeeman components (F, mF) → (F′, mF′) of a line at low field. */
-export function hyperfineComponentsTable(ln: LineResult, groups: HyperfineLineGroup[], home: TableHome): Table {
+/** Hyperfine Zeeman components (F, mF) → (F′, mF′) of a line at low field, the shifts with their uncertainties. */
+export function hyperfineComponentsTable(ln: LineResult, groups: HyperfineLineGroup[], home: TableHome, un: HyperfinePatternU = {}): Table {
   const id = ln.input.id;
-  const rows = groups.flatMap((g) => g.components.map((c) => ({ g, c })));
+  const rows = groups.flatMap((g, gi) => g.components.map((c, ci) => ({ g, c, u: un.hyperfineU?.[gi]?.shiftHzPerT[ci] ?? null })));
   return makeTable<(typeof rows)[number]>(
     {
       id: `hfc:${id}`,
@@ -303,7 +311,7 @@ export function hyperfineComponentsTable(ln: LineResult, groups: HyperfineLineGr
         { key: "mFl", label: "mF lower", kind: "quantum", cell: ({ c }) => quantumCell(c.mFl2, true) },
         { key: "pol", label: "polarization", kind: "text", cell: ({ c }) => textCell(polarizationSymbol(c.polarization, (c.mFu2 - c.mFl2) / 2)) },
         { key: "S", label: "strength (of line)", kind: "fraction", cell: ({ c }) => fractionCell(c.strength) },
-        { key: "shift", label: "shift", unit: "MHz/G", kind: "number", cell: ({ c }) => numberCell(c.shiftHzPerT.mul("1e-10"), 9) },
+        { key: "shift", label: "shift", unit: "MHz/G", kind: "number", cell: ({ c, u }) => uncertainCell(c.shiftHzPerT.mul("1e-10"), u === null ? null : u.mul("1e-10"), 9) },
         { key: "cyc", label: "cycling", kind: "text", cell: ({ c }) => textCell(c.cycling ? "cycling" : "") },
       ],
     },

@@ -11,6 +11,7 @@ import { lockPoints, strongestTransition, vacuumWavelength, type LockPoint } fro
 import { SPEED_OF_LIGHT } from "../physics/units.js";
 import { inAirFormulaRange, vacuumToAir } from "../physics/airWavelength.js";
 import type { LineResult } from "../results/types.js";
+import { lockKey, rss } from "../results/fieldUncertainty.js";
 import { lineLockAnchor, lockPointAnchor } from "./anchors.js";
 import { EXPORT_DIGITS } from "./exportJson.js";
 import { formatQuantum } from "./format.js";
@@ -22,6 +23,7 @@ import { makeTable } from "./tableSpec.js";
 
 const THZ = new Dec("1e12");
 const NM = new Dec("1e-9");
+const MHZ = new Dec("1e6");
 
 /**
  * Significant digits that show a frequency in THz to 1 kHz (three integer
@@ -53,9 +55,14 @@ export function airWavelengthOfCell(hz: Dec | null): Cell {
 
 export const wavelengthCell = (hz: Dec | null): Cell => numberCell(hz === null ? null : vacuumWavelength(hz, SPEED_OF_LIGHT).div(NM), hz === null ? 1 : absoluteDigits(hz));
 
-/** A frequency in Hz shown in MHz to 1 kHz, as the offset-from-reference column (lockOffsets.ts). */
-function mhzCell(hz: Dec | null): Cell {
+/**
+ * A frequency in Hz shown in MHz to 1 kHz, as the offset-from-reference
+ * column (lockOffsets.ts); with a standard uncertainty `u` (Hz) in the
+ * concise form instead, the value then to the place of its uncertainty.
+ */
+function mhzCell(hz: Dec | null, u: Dec | null = null): Cell {
   if (hz === null) return numberCell(null);
+  if (u !== null && !u.isZero()) return uncertainCell(hz.div(MHZ), u.div(MHZ), 10);
   const o = offsetFrom(exportText(hz, EXPORT_DIGITS), "0")!;
   return { text: partsText(o.parts), sort: o.sort, parts: o.parts };
 }
@@ -86,9 +93,11 @@ export interface LockView {
  * null (no absolute frequencies without a wavelength; the export still
  * lists the points with their offsets from the line centre).
  */
-export function lockView(ln: LineResult, groups: HyperfineLineGroup[] | null, home: TableHome): LockView | null {
+export function lockView(ln: LineResult, groups: HyperfineLineGroup[] | null, home: TableHome, offsetU?: Map<string, Dec | null>): LockView | null {
   if (!groups || groups.length === 0 || ln.frequencyHz === null) return null;
   const id = ln.input.id;
+  // ν0 (from the wavelength) and the offsets (from A, B) share no input: their uncertainties add in quadrature
+  const offU = (p: LockPoint) => offsetU?.get(lockKey(p.Fl2, p.Fu2)) ?? null;
   const points = lockPoints(groups, ln.frequencyHz);
   const reference = strongestTransition(points)!;
   // offsets from the 30-digit texts the cells carry, so the page script recomputes the same digits
@@ -106,10 +115,10 @@ export function lockView(ln: LineResult, groups: HyperfineLineGroup[] | null, ho
         { key: "kind", label: "resonance", kind: "text", cell: (p) => textCell(p.kind) },
         { key: "Fl", label: "F lower", kind: "text", cell: (p) => textCell(levels(p.Fl2)) },
         { key: "Fu", label: "F′ upper", kind: "text", cell: (p) => textCell(levels(p.Fu2)) },
-        { key: "nu", label: "frequency", unit: "THz", kind: "number", cell: (p) => frequencyCell(p.frequencyHz) },
+        { key: "nu", label: "frequency", unit: "THz", kind: "number", cell: (p) => frequencyCell(p.frequencyHz, rss(offU(p), ln.frequencyHzU)) },
         { key: "lambda", label: "vacuum wavelength", unit: "nm", kind: "number", cell: (p) => wavelengthCell(p.frequencyHz) },
         { key: "lambda_air", label: "air wavelength", unit: "nm", kind: "number", cell: (p) => airWavelengthOfCell(p.frequencyHz) },
-        { key: "off", label: "offset from line centre", unit: "MHz", kind: "number", cell: (p) => mhzCell(p.offset) },
+        { key: "off", label: "offset from line centre", unit: "MHz", kind: "number", cell: (p) => mhzCell(p.offset, offU(p)) },
         { key: "S", label: "strength (of line)", kind: "fraction", cell: (p) => fractionCell(p.strength) },
         { key: "pair", label: "pair spacing", unit: "MHz", kind: "number", cell: (p) => mhzCell(p.kind === "crossover" ? p.spacing : null) },
         {

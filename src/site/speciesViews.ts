@@ -491,9 +491,9 @@ export function lineViews(
       observer: observerView(ln, home),
       componentsAnchor: lineComponentsAnchor(ln.input.id),
       fieldsAnchor: lineFieldsAnchor(ln.input.id),
-      hyperfine: f.hyperfine ? hyperfineGroupsTable(ln, f.hyperfine, home) : null,
-      hyperfineComponents: f.hyperfine ? hyperfineComponentsTable(ln, f.hyperfine, home) : null,
-      lock: lockView(ln, f.hyperfine, home),
+      hyperfine: f.hyperfine ? hyperfineGroupsTable(ln, f.hyperfine, home, f) : null,
+      hyperfineComponents: f.hyperfine ? hyperfineComponentsTable(ln, f.hyperfine, home, f) : null,
+      lock: lockView(ln, f.hyperfine, home, f.hyperfineOffsetU),
       wavelengths: wavelengthsText(ln.input),
       wavelengthSplit: ln.lorentzDlambdaPerT
         ? { anchor: lineDlambdaSectionAnchor(ln.input.id), text: lorentzWavelengthText(ln)!, table: wavelengthSplitTable(ln, v.configured, home)! }

@@ -56,6 +56,8 @@ export interface Cell {
   term?: TermParts;
   /** In-site link target (relative to the site root), e.g. "species/rb87/#level:5s-S1/2". */
   href?: string;
+  /** A text cell whose text holds concise uncertainties ("3.228 917(3) G"): each is written in its own hideable element (uncertainProse.ts). */
+  prose?: boolean;
 }
 
 export interface Row {

@@ -7,6 +7,7 @@
  */
 import { NOTE_FOLD, noteSummary } from "./note.js";
 import { sortKey } from "./sortKey.js";
+import { uncertainProseHtml } from "./uncertainProse.js";
 import type { Cell, Column, Table, TermParts } from "./table.js";
 
 const ESCAPES: Record<string, string> = { "&": "&amp;", '"': "&quot;", "'": "&#39;", "<": "&lt;", ">": "&gt;", "\\": "&#92;" };
@@ -35,6 +36,7 @@ export function cellHtml(c: Cell, col: Column): string {
     const unc = p.unc ? `<span class="unc">${e(p.unc)}</span>` : "";
     return `${fraction}<span class="n">${e(p.sign)}${e(p.int)}<span class="frac">${e(p.frac)}${unc}${e(p.exp)}</span>${pad}</span>`;
   }
+  if (c.prose) return uncertainProseHtml(c.text);
   return e(c.text);
 }
 

@@ -102,6 +102,25 @@ describe("absolute frequencies of the components at each field", () => {
   });
 });
 
+describe("uncertainties of the weak-field hyperfine components and the linear limits", () => {
+  it("give the D2 cycling component's shift_Hz_per_T_u = √((μB/h·3u(gJ′)/2)² + (μB/h·u(gJ)/2)² + (s·u(μB/h))²), gI cancelling", () => {
+    const g = line(rb, "D2").hyperfine_groups.find((x: Json) => x.F_lower === "2" && x.F_upper === "3");
+    const c = g.components.find((x: Json) => x.mF_upper === "3" && x.mF_lower === "2");
+    // gJ′ = 1.3362(13), gJ = 2.00233113(20) (Steck); μB/h = 13 996 244 917.1(4.4) Hz/T (CODATA 2022)
+    const mu = dec("13996244917.1");
+    const s = dec("1.5").mul("1.3362").sub(dec("0.5").mul("2.00233113"));
+    const hand = mu.mul("0.00195").pow(2).add(mu.mul("0.0000001").pow(2)).add(s.mul("4.4").pow(2)).sqrt();
+    expect(dec(c.shift_Hz_per_T_u).div(hand).sub(1).abs().lt("1e-9")).toBe(true);
+  });
+
+  it("mark the limits of the linear regime as not propagated, their _u keys null", () => {
+    const lv = rb.levels.find((l: Json) => l.id === "5s-S1/2");
+    expect(lv.linear_validity.uncertainty).toBe("not propagated");
+    expect(lv.linear_validity.within_1_percent_up_to_T_u).toBeNull();
+    expect(lv.linear_validity.within_1_kHz_up_to_T_u).toBeNull();
+  });
+});
+
 describe("lock points", () => {
   it("name a crossover's shared level as a string and its pair as a two-element array", () => {
     const lp = line(rb, "D2").lock_points as Json[];
