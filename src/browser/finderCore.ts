@@ -26,7 +26,7 @@ import { formatM, formatQuantum, partsText, polarizationSymbol, transitionKindLa
 import type { ConstantDoc, LevelDoc, LineDoc, SearchData } from "../site/searchIndex.js";
 import { unpackInts } from "../site/searchCodec.js";
 import { searchTokens } from "../site/searchNormalize.js";
-import { convertShift, DEFAULT_SHIFT_UNIT } from "../site/shiftUnits.js";
+import { convertShift, convertShiftUncertain, DEFAULT_SHIFT_UNIT } from "../site/shiftUnits.js";
 import { FIELD_UNITS, KIND_WORDS, POLARIZATION_WORDS, TRANSITION_WORDS, type TransitionWord } from "../site/searchWords.js";
 
 export interface FinderRow {
@@ -271,10 +271,12 @@ export function createFinder(data: SearchData, MiniSearchClass: typeof MiniSearc
   const levelBase = (l: LevelDoc) => `${speciesOf(l[0])[1]} · ${l[1]} ${l[2]}`;
 
   /** The shift of sublevel m2 in the reader's unit, from the shift per unit m (Hz/T). */
-  function shiftText(perM: string, m2: number, unit: string): string {
+  function shiftText(perM: string, m2: number, unit: string, perMU = ""): string {
     if (!perM) return "";
     const hz = timesM(perM, m2);
-    const parts = hz === null ? null : convertShift(hz, unit);
+    // the uncertainty of m·(g·μB/h) is |m| times that of g·μB/h: m is exact
+    const uHz = perMU && m2 !== 0 ? timesM(perMU, Math.abs(m2)) : null;
+    const parts = hz === null ? null : uHz !== null ? convertShiftUncertain(hz, uHz, unit) : convertShift(hz, unit);
     return parts ? `${partsText(parts)} ${unit}` : "";
   }
 
@@ -305,7 +307,7 @@ export function createFinder(data: SearchData, MiniSearchClass: typeof MiniSearc
         if (s.f !== undefined && s.f !== F2) return;
         const gF = l[9][k] ?? "";
         if (mf === undefined) {
-          const per = shiftText(l[10][k] ?? "", 2, unit);
+          const per = shiftText(l[10][k] ?? "", 2, unit, l[16]?.[k] ?? "");
           out.push({
             kind: "hyperfine level",
             href: `${pageOf(l, ROWS.F)}#${hyperfineAnchor(id, F2)}`,
@@ -315,7 +317,7 @@ export function createFinder(data: SearchData, MiniSearchClass: typeof MiniSearc
           return;
         }
         if (!mValues(F2).includes(mf)) return;
-        const shift = shiftText(l[10][k] ?? "", mf, unit);
+        const shift = shiftText(l[10][k] ?? "", mf, unit, l[16]?.[k] ?? "");
         out.push({
           kind: "hyperfine sublevel",
           href: `${pageOf(l, ROWS.mF)}#${mFAnchor(id, F2, mf)}`,
@@ -326,7 +328,7 @@ export function createFinder(data: SearchData, MiniSearchClass: typeof MiniSearc
     }
     const mj = s.mj ?? (s.f === undefined && s.mf === undefined ? s.m : undefined);
     if (mj !== undefined && mValues(l[5]).includes(mj)) {
-      const shift = shiftText(l[8], mj, unit);
+      const shift = shiftText(l[8], mj, unit, l[15] ?? "");
       out.push({
         kind: "sublevel",
         href: `${pageOf(l, ROWS.mJ)}#${mJAnchor(id, mj)}`,

@@ -26,7 +26,9 @@
 import { exportText, type Dec } from "../physics/decimal.js";
 import { mValues } from "../physics/quantum.js";
 import { componentAnchor, fieldStateAnchor, hyperfineAnchor, mFAnchor, mJAnchor, transitionAnchor } from "./anchors.js";
-import { formatNumber, partsText, termText, writtenParts } from "./format.js";
+import { formatUncertain, partsText, termText, writtenParts } from "./format.js";
+import { perUnitMU } from "./linearTables.js";
+import type { SublevelShift } from "../results/types.js";
 import type { TermLike } from "./plainFormat.js";
 import { htmlFile, levelPagePath, linePagePath, speciesPath } from "./pageUrls.js";
 import { packInts } from "./searchCodec.js";
@@ -60,7 +62,11 @@ export interface SearchSpecies {
     gJ: Dec | null;
     /** A measured gJ is shown as written (its own digits and uncertainty), as the levels table shows it. */
     gJFrom?: "measured" | "LS" | "jK" | "jj" | "none";
-    hyperfine: { F2: number; gF: Dec | null }[];
+    /** Standard uncertainty of gJ in use (null or absent: exact); results/linearUncertainties.ts. */
+    gJU?: Dec | null;
+    /** Linear shifts with their uncertainties, for the uncertainty of the shift per unit m (linearTables.ts perUnitMU). */
+    sublevels?: SublevelShift[];
+    hyperfine: { F2: number; gF: Dec | null; gFU?: Dec | null; sublevels?: SublevelShift[] }[];
   }[];
   lines: {
     input: { id: string; upper: string; lower: string; wavelength: { si: Dec } | null; airWavelength?: { si: Dec } | null; multipole: string };
@@ -87,7 +93,7 @@ export type SpeciesDoc = [string, string, string, string];
  *  field-insensitive points as [transition index, tesla, text],
  *  for transitions spread over several pages: each one's page as an index into RowPages[4] (packed), else ""]
  */
-export type LevelDoc = [number, string, string, string, string, number, number[], string, string, string[], string[], RowPages, string | number[], [number, string, string][], string | number[]];
+export type LevelDoc = [number, string, string, string, string, number, number[], string, string, string[], string[], RowPages, string | number[], [number, string, string][], string | number[], string, string[]];
 /**
  * Pages of a level's rows: [mJ, F, (F, mF), energies at the fields, transitions]; "" is the species
  * overview. The transitions may be on several pages (one per lower F when a level has very many):
@@ -152,12 +158,18 @@ function groundLevels(s: SearchSpecies): Set<string> {
   return new Set(s.levels.filter((l) => !l.input.energy && !uppers.has(l.input.id)).map((l) => l.input.id));
 }
 
-const shown = (g: Dec | null) => (g === null ? "" : formatNumber(g, G_DIGITS));
+/** g as the tables show it: with its standard uncertainty in the concise form when it has one. */
+const shown = (g: Dec | null, u: Dec | null = null) => (g === null ? "" : formatUncertain(g, u, G_DIGITS));
 function gJShown(l: SearchSpecies["levels"][number]): string {
   const written = l.gJFrom === "measured" && l.input.gJ ? writtenParts(l.input.gJ.text) : null;
-  return written ? partsText(written) : shown(l.gJ);
+  return written ? partsText(written) : shown(l.gJ, l.gJU ?? null);
 }
 const perM = (g: Dec | null, muB_h: Dec) => (g === null ? "" : exportText(muB_h.mul(g), PER_M_DIGITS));
+/** Standard uncertainty (Hz/T) of the shift per unit m, "" when exact or not known. */
+const perMU = (sublevels: SublevelShift[] | undefined, top2: number) => {
+  const u = sublevels ? perUnitMU(sublevels, top2) : null;
+  return u === null ? "" : exportText(u, PER_M_DIGITS);
+};
 
 /** One species' part of the search data. Pure: the same species gives the same data. */
 export function searchData(s: SearchSpecies, fields: { text: string; tesla: string }[]): SearchData {
@@ -203,12 +215,14 @@ export function searchData(s: SearchSpecies, fields: { text: string; tesla: stri
       l.hyperfine.map((hf) => hf.F2),
       gJShown(l),
       perM(l.gJ, s.muB_h),
-      l.hyperfine.map((hf) => shown(hf.gF)),
+      l.hyperfine.map((hf) => shown(hf.gF, hf.gFU ?? null)),
       l.hyperfine.map((hf) => perM(hf.gF, s.muB_h)),
       pages,
       packInts(flat),
       points,
       transitionPages.length > 1 ? packInts(onPage.map((p) => transitionPages.indexOf(p))) : "",
+      perMU(l.sublevels, l.J2),
+      l.hyperfine.map((hf) => perMU(hf.sublevels, hf.F2)),
     ]);
   }
   for (const ln of s.lines) {

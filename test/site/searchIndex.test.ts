@@ -189,7 +189,9 @@ describe("search data of the demo site", () => {
     expect(r.answer).toBe(`gF = ${cells[2]}; shift ${cells[3]} MHz/G`);
     // 87Rb 5²S1/2 F = 2: gF ≈ 0.4998 (Steck, "Rubidium 87 D Line Data", from memory), so mF = 1 moves by
     // gF·μB/h ≈ 0.6996 MHz/G (μB/h = 1.399 624 49 MHz/G, CODATA 2022).
-    expect(r.answer).toMatch(/^gF = 0\.499\u20098\d\d\u2009\d+; shift 0\.699\u20095\d\d\u2009\d+ MHz\/G$/);
+    // Both carry their standard uncertainty in the concise form, u(gF) = u(gJ)/4 ≈ 5·10⁻⁸ (Steck's gJ = 2.00233113(20)),
+    // so the shift's is u(gF)·μB/h ≈ 7·10⁻⁸ MHz/G.
+    expect(r.answer).toMatch(/^gF = 0\.499\u20098\d\d\u2009\d+\(50\); shift 0\.699\u20095\d\d\u2009\d+\(70\) MHz\/G$/);
     // The reader's unit is followed: GHz/T is 10⁴ × MHz/G… in the server's own rounding.
     expect(finder.search("87Rb F=2 mF=1", 1, { unit: "GHz/T" }).rows[0]!.answer).toMatch(/shift 6\.99\d.* GHz\/T$/);
   });
