@@ -155,7 +155,7 @@ function levelFields(
     const extra = partners.coefficient(F2, mF2);
     return own === null || extra === null ? null : own.plus(extra);
   };
-  // the same coefficient as an uncertain number: own part analytic, partners' part through μB/h, gS and gL (fieldUncertainty.ts)
+  // the same coefficient as an uncertain number: own part analytic, partners' part through μB/h, gS, gL, energies, A and B (fieldUncertainty.ts)
   const quadraticU = (F2: number, mF2: number): Uncertain | null => {
     const extra = partners.coefficient(F2, mF2);
     if (extra === null) return null;
@@ -166,7 +166,8 @@ function levelFields(
       if (value === null || sens === null) return null;
       own = fromLevelSensitivity(value, sens, params);
     }
-    return plus(own, partnerPartU(extra, inputs));
+    const at = partners.slopes(F2, mF2);
+    return plus(own, partnerPartU(extra, inputs, at ? { at, levelId: l.input.id, partnerIds: partners.included } : undefined));
   };
   const common = {
     hyperfineListed: hasHf ? l.input.hyperfine !== null : null,

@@ -14,10 +14,10 @@
  * energies) or a line component's shift adds the contributions of the same
  * A, gJ, μB/h before squaring: correlations from shared inputs are kept.
  *
- * Not propagated, said on the pages and in the export's methods note: the
- * level energies' and the partner levels' A and B contributions to the
- * fine-structure partners' part of a second-order coefficient
- * (partnerQuadratic.ts; its μB/h, gS and gL contributions are propagated).
+ * The fine-structure partners' part of a second-order coefficient
+ * (partnerQuadratic.ts) is propagated from μB/h, gS, gL and from the level
+ * energies and hyperfine constants A, B of the level and its partners
+ * (partnerPartU).
  *
  * Worked example: 87Rb 5²S1/2 with the demo's gJ = 2.00233113(20) and
  * gI = −0.0009951414(10): the field-insensitive point of |1,−1⟩ ↔ |2,1⟩
@@ -29,6 +29,7 @@ import { Rational } from "../physics/rational.js";
 import { derived, exact, linear, minus, standardUncertainty, times, type Uncertain } from "../physics/uncertain.js";
 import { combine, linearSlopeSensitivity, NO_SENSITIVITY, type LevelSensitivity, type TermSensitivity } from "../physics/field/sensitivity.js";
 import type { HyperfineZeemanLevel } from "../physics/field/hyperfineZeeman.js";
+import type { PartnerSlope } from "../physics/field/partnerQuadratic.js";
 import type { SublevelLabel, SublevelTransition } from "../physics/field/sublevelTransitions.js";
 import { gF as hyperfineGOf, hyperfineCoefficients } from "../physics/hyperfine.js";
 import type { TransitionUncertainty } from "./fieldTypes.js";
@@ -113,16 +114,27 @@ export function fromTermSensitivity(value: Dec, s: TermSensitivity, p: TermParam
 /**
  * The fine-structure partners' part β_p of a second-order coefficient as an
  * uncertain number: β_p ∝ (μB/h)²(gS − gL)², so ∂β_p/∂(μB/h) = 2β_p/(μB/h),
- * ∂β_p/∂gS = −∂β_p/∂gL = 2β_p/(gS − gL) (exact). The dependence on the
- * energies and the partners' A, B is not propagated (module comment).
+ * ∂β_p/∂gS = −∂β_p/∂gL = 2β_p/(gS − gL) (exact); and, given `slopes`
+ * (partnerQuadratic.ts partnerQuadraticSlopes: each term ∝ 1/ΔE, so
+ * ∂/∂ΔE = −term/ΔE), through the level energies and hyperfine constants A, B
+ * of the level (`levelId`) and of each included partner (`partnerIds`, the
+ * slopes' order).
  */
-export function partnerPartU(value: Dec, inputs: SpeciesInputs): Uncertain {
+export function partnerPartU(
+  value: Dec, inputs: SpeciesInputs,
+  slopes?: { at: { level: PartnerSlope; partners: PartnerSlope[] }; levelId: string; partnerIds: readonly string[] },
+): Uncertain {
   if (value.isZero()) return exact(ZERO);
   const dg = inputs.gS.value.minus(inputs.gL.value);
+  const levelSlopes = (id: string, s: PartnerSlope): [Dec, Uncertain][] => {
+    const li = inputs.level(id);
+    return [[s.energy, li.energy ?? exact(ZERO)], [s.A, li.A], [s.B, li.B]];
+  };
   return derived(value, [
     [value.mul(2).div(inputs.muB_h.value), inputs.muB_h],
     [value.mul(2).div(dg), inputs.gS],
     [value.mul(-2).div(dg), inputs.gL],
+    ...(slopes ? [...levelSlopes(slopes.levelId, slopes.at.level), ...slopes.at.partners.flatMap((s, i) => levelSlopes(slopes.partnerIds[i]!, s))] : []),
   ]);
 }
 

@@ -17,9 +17,11 @@
 import { ZERO, type Dec } from "../physics/decimal.js";
 import type { ConstantsEdition } from "../physics/constants/constant.js";
 import { val } from "../physics/constants/constant.js";
-import { partnerQuadraticCoefficient, type PartnerLevel, type PartnerTerm } from "../physics/field/partnerQuadratic.js";
+import { partnerQuadraticCoefficient, partnerQuadraticSlopes, type PartnerLevel, type PartnerSlope, type PartnerTerm } from "../physics/field/partnerQuadratic.js";
 import type { LevelResult, SpeciesResult } from "./types.js";
 import { lsTerm } from "../data/model.js";
+
+const NO_SLOPES = { level: { energy: ZERO, A: ZERO, B: ZERO }, partners: [] };
 
 export type QuadraticScope = "term" | "term-partial" | "J-only";
 
@@ -33,6 +35,8 @@ export interface QuadraticPartners {
   notLS: "jK" | "jj" | null;
   /** β_partners(F, mF) in Hz/T² (0 when nothing is included); null where perturbation theory fails. */
   coefficient: (F2: number, mF2: number) => Dec | null;
+  /** Its slopes in the level's and each included partner's energy, A and B (order of `included`); null where the coefficient is. */
+  slopes: (F2: number, mF2: number) => { level: PartnerSlope; partners: PartnerSlope[] } | null;
 }
 
 /** Key of the LS term a level belongs to (configuration, multiplicity, L, parity mark). */
@@ -46,7 +50,7 @@ export function termKeyOf(l: LevelResult): string {
 export function quadraticPartners(s: SpeciesResult, l: LevelResult, c: ConstantsEdition, hyperfine: (l: LevelResult) => { A: Dec; B: Dec } | null): QuadraticPartners {
   const ls = lsTerm(l.input.term);
   // the partner sum uses the LS structure of the term; a jK or jj level keeps its own J
-  if (!ls) return { scope: "J-only", included: [], missingJ2: [], notLS: l.input.term.scheme === "jj" ? "jj" : "jK", coefficient: () => ZERO };
+  if (!ls) return { scope: "J-only", included: [], missingJ2: [], notLS: l.input.term.scheme === "jj" ? "jj" : "jK", coefficient: () => ZERO, slopes: () => NO_SLOPES };
   const { S2, L } = ls;
   const key = termKeyOf(l);
   const coupling: number[] = [];
@@ -55,7 +59,7 @@ export function quadraticPartners(s: SpeciesResult, l: LevelResult, c: Constants
   const included = l.input.energy === null ? [] : listed;
   const missingJ2 = coupling.filter((j) => !included.some((p) => p.J2 === j));
   const scope: QuadraticScope = missingJ2.length === 0 ? "term" : included.length === 0 ? "J-only" : "term-partial";
-  if (included.length === 0) return { scope, included: [], missingJ2, notLS: null, coefficient: () => ZERO };
+  if (included.length === 0) return { scope, included: [], missingJ2, notLS: null, coefficient: () => ZERO, slopes: () => NO_SLOPES };
   const asPartner = (p: LevelResult): PartnerLevel => {
     const hf = hyperfine(p);
     return { J2: p.J2, energy: p.input.energy!.si, A: hf?.A ?? ZERO, B: hf?.B ?? ZERO };
@@ -69,5 +73,6 @@ export function quadraticPartners(s: SpeciesResult, l: LevelResult, c: Constants
     missingJ2,
     notLS: null,
     coefficient: (F2, mF2) => partnerQuadraticCoefficient(term, self, others, F2, mF2),
+    slopes: (F2, mF2) => partnerQuadraticSlopes(term, self, others, F2, mF2),
   };
 }

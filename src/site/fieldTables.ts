@@ -138,6 +138,7 @@ export function validityFacts(f: LevelFieldResult): string[] {
     `Linear shifts within 1 % of the exact ones${within} up to ${fieldText(v.relative.tesla)}${first(v.relative.sublevel)}.`,
     `Linear shifts within 1 kHz of the exact ones${within} up to ${fieldText(v.absolute.tesla)}${first(v.absolute.sublevel)}.`,
     ...(v.paschenBackTesla ? [`Hyperfine Paschen–Back scale (largest hyperfine interval over μB·|gJ|/h): ${fieldText(v.paschenBackTesla)}; well above it the states are |mJ, mI⟩.`] : []),
+    "These limits of the linear regime are given without uncertainties (not propagated).",
   ];
 }
 

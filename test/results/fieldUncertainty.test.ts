@@ -103,3 +103,37 @@ describe("field-dependent uncertainties against the Monte Carlo fixture (87Rb 5�
     expect(u.fieldInsensitive[0]!.hz!.toString()).toBe("0.00009");
   });
 });
+
+describe("the fine-structure partners' part of a second-order coefficient", () => {
+  // Sr 5s5p ³P₀ and ³P₁ (NIST ASD energies, from memory) with an uncertainty of 0.001 cm⁻¹ given here as test input
+  const sr = (u: string) => `id: sr88
+label: "88Sr"
+mass: "87.9056125 u"
+levels:
+  - id: 3P0
+    config: 5s5p
+    term: 3Po0
+    energy: "14317.507${u} cm-1"
+    source: "test input"
+  - id: 3P1
+    config: 5s5p
+    term: 3Po1
+    energy: "14504.334${u} cm-1"
+    source: "test input"
+`;
+  const beta = (u: string) => computeFrom(sr(u), ["0 G", "1 G"]).fields.levels.get("3P0")!.rows[0]!;
+
+  it("carries the level energies' uncertainty: u² grows by (β/ΔE)²·(u(E₀)² + u(E₁)²) (chain rule on β ∝ 1/ΔE, by hand)", () => {
+    const exactE = beta("");
+    const withU = beta("(1)");
+    expect(withU.quadraticPerTesla2!.eq(exactE.quadraticPerTesla2!)).toBe(true);
+    // u(E) = 0.001 cm⁻¹ × c = 29 979 245.8 Hz (c exact, SI); ΔE = 186.827 cm⁻¹ × c
+    const uE = new Dec("29979245.8");
+    const dE = new Dec("186.827").mul("29979245800");
+    const grow = exactE.quadraticPerTesla2!.div(dE).pow(2).mul(uE.pow(2).mul(2));
+    const got = withU.quadraticU!.pow(2).minus(exactE.quadraticU!.pow(2));
+    expect(got.div(grow).minus(1).abs().toNumber()).toBeLessThan(1e-20);
+    // the energies dominate here: 0.001 cm⁻¹ in 186.827 cm⁻¹ is 5e-6 relative per level, far above the constants' ~1e-9
+    expect(withU.quadraticU!.div(exactE.quadraticU!).toNumber()).toBeGreaterThan(100);
+  });
+});

@@ -120,3 +120,67 @@ export function partnerQuadraticCoefficient(term: PartnerTerm, level: PartnerLev
   const dg = term.gS.minus(term.gL).mul(muB_h);
   return sum.mul(dg).mul(dg);
 }
+
+/** ∂β/∂E, ∂β/∂A, ∂β/∂B of one J level (Hz/T² per Hz). */
+export interface PartnerSlope {
+  energy: Dec;
+  A: Dec;
+  B: Dec;
+}
+
+/**
+ * The partial derivatives of β_partners(F, mF) (partnerQuadraticCoefficient)
+ * with respect to the level energies and hyperfine constants of `level` and
+ * of each partner (in the order of `partners`), or null where the
+ * coefficient is null. Each term of the sum is t = K·e²/Δ with
+ * K = (μB/h)²(gS − gL)², e² exact and Δ = [E_J + a_F·A + b_F·B] − [E_J′ +
+ * a_F′·A′ + b_F′·B′] (a_F, b_F the exact hyperfine coefficients of
+ * hyperfine.ts), so ∂t/∂Δ = −t/Δ and
+ *   ∂β/∂E_J = −Σ t/Δ,  ∂β/∂A = −Σ a_F·t/Δ,  ∂β/∂B = −Σ b_F·t/Δ,
+ *   ∂β/∂E_J′ = +Σ_{J′} t/Δ, ∂β/∂A′ = +Σ_{J′} a_F′·t/Δ, ∂β/∂B′ = +Σ_{J′} b_F′·t/Δ
+ * (the chain rule; Condon and Shortley §16.3 for the sum itself). Exact
+ * up to the Dec division, like the coefficient. (The μB/h, gS and gL slopes,
+ * 2β/(μB/h) and ±2β/(gS − gL), follow from β ∝ K alone.)
+ *
+ * Worked example: 88Sr ³P₀ with only ³P₁ (I = 0): β = (2/3)K/Δ with
+ * Δ = E(³P₀) − E(³P₁) = −186.827 cm⁻¹·c (NIST), so ∂β/∂E(³P₁) = β/Δ and
+ * ∂β/∂E(³P₀) = −β/Δ: with β = −2.34255…e7 Hz/T² (module comment) and
+ * Δ = −5.60093…e12 Hz, ∂β/∂E(³P₁) = +4.1824…e−6 (Hz/T²)/Hz (raising ³P₁
+ * makes β smaller in size). A test repeats it and checks every slope
+ * against a central difference of partnerQuadraticCoefficient.
+ */
+export function partnerQuadraticSlopes(
+  term: PartnerTerm, level: PartnerLevel, partners: readonly PartnerLevel[], F2: number, mF2: number,
+): { level: PartnerSlope; partners: PartnerSlope[] } | null {
+  const { S2, L, I2, muB_h } = term;
+  if (!fValues(I2, level.J2).includes(F2) || Math.abs(mF2) > F2 || (F2 - mF2) % 2 !== 0) throw new RangeError(`no sublevel F=${F2}/2, mF=${mF2}/2`);
+  const dg = term.gS.minus(term.gL).mul(muB_h);
+  const K = dg.mul(dg);
+  const ONE = new Dec(1);
+  const aOf = (J2: number, F: number) => hyperfineShift(ONE, ZERO, I2, J2, F);
+  const bOf = (J2: number, F: number) => hyperfineShift(ZERO, ONE, I2, J2, F);
+  const own = level.energy.plus(hyperfineShift(level.A, level.B, I2, level.J2, F2));
+  const self: PartnerSlope = { energy: ZERO, A: ZERO, B: ZERO };
+  const others: PartnerSlope[] = [];
+  for (const p of partners) {
+    const slope: PartnerSlope = { energy: ZERO, A: ZERO, B: ZERO };
+    others.push(slope);
+    if (p.J2 === level.J2 || Math.abs(p.J2 - level.J2) > 2) continue;
+    for (const Fp2 of fValues(I2, p.J2)) {
+      if (Math.abs(Fp2 - F2) > 2 || Math.abs(mF2) > Fp2) continue;
+      const e2 = spinZSquaredElement(S2, L, I2, level.J2, F2, p.J2, Fp2, mF2);
+      if (e2.isZero()) continue;
+      const gap = own.minus(p.energy.plus(hyperfineShift(p.A, p.B, I2, p.J2, Fp2)));
+      if (gap.isZero()) return null;
+      // ∂t/∂Δ = −K·e²/Δ²
+      const d = K.mul(ratDec(e2)).div(gap.mul(gap)).neg();
+      self.energy = self.energy.plus(d);
+      self.A = self.A.plus(d.mul(aOf(level.J2, F2)));
+      self.B = self.B.plus(d.mul(bOf(level.J2, F2)));
+      slope.energy = slope.energy.minus(d);
+      slope.A = slope.A.minus(d.mul(aOf(p.J2, Fp2)));
+      slope.B = slope.B.minus(d.mul(bOf(p.J2, Fp2)));
+    }
+  }
+  return { level: self, partners: others };
+}

@@ -1,7 +1,7 @@
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { Dec, dec, ZERO } from "../../../src/physics/decimal.js";
-import { partnerQuadraticCoefficient, spinZSquaredElement, type PartnerLevel, type PartnerTerm } from "../../../src/physics/field/partnerQuadratic.js";
+import { partnerQuadraticCoefficient, partnerQuadraticSlopes, spinZSquaredElement, type PartnerLevel, type PartnerTerm } from "../../../src/physics/field/partnerQuadratic.js";
 import { quadraticZeemanCoefficient } from "../../../src/physics/field/quadraticZeeman.js";
 import { fValues, hyperfineShift } from "../../../src/physics/hyperfine.js";
 import { landeLS } from "../../../src/physics/lande.js";
@@ -96,5 +96,51 @@ describe("partnerQuadraticCoefficient", () => {
   it("is zero without listed partners, and null when a partner's level coincides", () => {
     expect(partnerQuadraticCoefficient(sr88.term, p0, [], 0, 0)!.isZero()).toBe(true);
     expect(partnerQuadraticCoefficient(sr88.term, p0, [{ ...p1, energy: p0.energy }], 0, 0)).toBeNull();
+  });
+});
+
+describe("partnerQuadraticSlopes", () => {
+  const sr88 = termOf(fixtureCase("88Sr 5s5p 3P"));
+  const [p0, p1, p2] = sr88.levels as [PartnerLevel, PartnerLevel, PartnerLevel];
+
+  it("gives Sr ³P₀ ∂β/∂E(³P₁) = β/(E(³P₀) − E(³P₁)) ≈ +4.1824e−6 (Hz/T²)/Hz (−2.34255e7 Hz/T² over −186.827 cm⁻¹·c, by hand) and ∂β/∂E(³P₀) its negative (doc example)", () => {
+    const beta = partnerQuadraticCoefficient(sr88.term, p0, [p1, p2], 0, 0)!;
+    const s = partnerQuadraticSlopes(sr88.term, p0, [p1, p2], 0, 0)!;
+    // chain rule on β = (2/3)K/Δ by hand: ∂β/∂E(³P₁) = β/Δ with Δ = E(³P₀) − E(³P₁) (textbook calculus)
+    const hand = beta.div(p0.energy.minus(p1.energy));
+    expect(s.partners[0]!.energy.minus(hand).abs().div(hand).toNumber()).toBeLessThan(1e-50);
+    expect(s.level.energy.plus(hand).abs().div(hand).toNumber()).toBeLessThan(1e-50);
+    expect(s.partners[0]!.energy.toSignificantDigits(5).toString()).toBe("0.0000041824");
+    // ³P₂ does not couple to ³P₀ (|ΔJ| = 2)
+    expect(s.partners[1]!.energy.isZero()).toBe(true);
+  });
+
+  it("agrees with central differences of the coefficient in every energy, A and B (87Sr ³P₁, F = 9/2, mF = 5/2; an independent route)", () => {
+    const c = fixtureCase("87Sr 5s5p 3P");
+    const { term, levels } = termOf(c);
+    const lv = levels.find((l) => l.J2 === 2)!;
+    const others = levels.filter((l) => l !== lv);
+    const F2 = 9;
+    const mF2 = 5;
+    const s = partnerQuadraticSlopes(term, lv, others, F2, mF2)!;
+    const beta = (self: PartnerLevel, ps: PartnerLevel[]) => partnerQuadraticCoefficient(term, self, ps, F2, mF2)!;
+    const h = new Dec("1e-6"); // Hz; the 60-digit arithmetic leaves a central difference's h² error far below the check
+    const diff = (bump: (d: Dec) => [PartnerLevel, PartnerLevel[]]) => {
+      const [a1, a2] = bump(h);
+      const [b1, b2] = bump(h.neg());
+      return beta(a1, a2).minus(beta(b1, b2)).div(h.mul(2));
+    };
+    const close = (got: Dec, want: Dec, what: string) => {
+      const scale = want.abs().plus("1e-30");
+      expect(got.minus(want).abs().div(scale).toNumber(), what).toBeLessThan(1e-9);
+    };
+    for (const key of ["energy", "A", "B"] as const) {
+      close(s.level[key], diff((d) => [{ ...lv, [key]: lv[key].plus(d) }, others]), `level ${key}`);
+      others.forEach((p, i) => {
+        close(s.partners[i]![key], diff((d) => [lv, others.map((q) => (q === p ? { ...q, [key]: q[key].plus(d) } : q))]), `partner J=${p.J2}/2 ${key}`);
+      });
+    }
+    // the slopes are not all zero: A of 87Sr ³P₁ enters through the hyperfine shift of F = 9/2
+    expect(s.level.A.isZero()).toBe(false);
   });
 });
