@@ -5,14 +5,17 @@ import { breitRabiEnergy } from "../../../src/physics/field/breitRabi.js";
 import { quadraticZeemanCoefficient } from "../../../src/physics/field/quadraticZeeman.js";
 import { sublevelTransitions } from "../../../src/physics/field/sublevelTransitions.js";
 import { termHyperfineZeemanSolver, prepareTerm, type TermProblem } from "../../../src/physics/field/termHyperfineZeeman.js";
+import { termSublevelTransitions } from "../../../src/physics/field/termSublevelTransitions.js";
 import {
   breitRabiSensitivity,
   insensitivePointSensitivity,
   linearSlopeSensitivity,
+  termInsensitivePointSensitivity,
   quadraticSensitivity,
   stateSensitivity,
   termStateSensitivity,
   type LevelSensitivity,
+  type TermSensitivity,
 } from "../../../src/physics/field/sensitivity.js";
 import { landeLS } from "../../../src/physics/lande.js";
 import { CS133_6S, H1_2P32, K40_4S, muB_h, RB87_5P32, RB87_5S } from "./levels.js";
@@ -203,6 +206,60 @@ describe("termStateSensitivity (Hellmann–Feynman on the term solver)", () => {
         }
       }
     }
+  });
+});
+
+describe("termInsensitivePointSensitivity (implicit-function theorem on the term solver)", () => {
+  const CM = new Dec("29979245800"); // Hz per cm⁻¹ (c exact, SI)
+  const gL = dec("0.99999368"); // 1 − m_e/M(87Rb), rounded (only compares two routes)
+  const gS = dec("2.00231930436092"); // CODATA 2022 −g_e
+  // 87Rb 5p ²P: Steck (A, B, gJ of P3/2; D1/D2 wave numbers); P1/2 gJ the LS value
+  const problem = (): TermProblem => ({
+    S2: 1, L: 1, I2: 3, gL, gS, gI: dec("-0.0009951414"), muB_h,
+    levels: [
+      { J2: 1, energy: dec("12578.951").mul(CM), gJ: landeLS(1, 1, 1, gL, gS)!, A: dec("408.328e6"), B: ZERO },
+      { J2: 3, energy: dec("12816.549").mul(CM), gJ: dec("1.3362"), A: dec("84.7185e6"), B: dec("12.4965e6") },
+    ],
+  });
+  const up = { F2: 4, mF2: 2 };
+  const lo = { F2: 2, mF2: -2 };
+  // the field-insensitive point of 5²P1/2 |1,−1⟩ ↔ |2,1⟩ located afresh by the term solver's own search for a problem p
+  const point = (p: TermProblem) => {
+    const l0 = p.levels[0]!;
+    const level: HyperfineZeemanLevel = { J2: l0.J2, I2: p.I2, gJ: l0.gJ, gI: p.gI, A: l0.A, B: l0.B, muB_h: p.muB_h };
+    const t = termSublevelTransitions(prepareTerm(p), 0, level, [], [], { toTesla: dec("0.01") }).find(
+      (x) => x.upper.F2 === up.F2 && x.upper.mF2 === up.mF2 && x.lower.F2 === lo.F2 && x.lower.mF2 === lo.mF2,
+    )!;
+    return t.fieldInsensitive.find((q) => q.tesla.gt(0))!;
+  };
+
+  it("equals a central difference of the re-solved point (field and frequency) of 87Rb 5²P1/2 |1,−1⟩ ↔ |2,1⟩ for every energy, A, B, gJ, gI, gS, gL and μB/h", () => {
+    const base = problem();
+    const at = point(base);
+    // B* ≈ 3.23 G·(A(P1/2)/A(S1/2))·(gJ(S)/gJ(P1/2))² ≈ 3.5 G (scaling of the Breit–Rabi point x* ∝ gI/gJ, textbook)
+    expect(at.tesla.toNumber()).toBeGreaterThan(3e-4);
+    expect(at.tesla.toNumber()).toBeLessThan(4e-4);
+    const s = termInsensitivePointSensitivity(prepareTerm(base), 0, up, lo, at.tesla);
+    type Knob = { name: string; x: Dec; set: (x: Dec) => TermProblem; pick: (t: TermSensitivity) => Dec };
+    const perLevel = (k: "energy" | "A" | "B" | "gJ", li: number): Knob => ({
+      name: `${k}[${li}]`, x: base.levels[li]![k],
+      set: (x) => ({ ...base, levels: base.levels.map((l, i) => (i === li ? { ...l, [k]: x } : l)) }),
+      pick: (t) => t[k][li]!,
+    });
+    const global = (k: "gI" | "gS" | "gL" | "muB_h"): Knob => ({ name: k, x: base[k], set: (x) => ({ ...base, [k]: x }), pick: (t) => t[k] });
+    const knobs = [...[0, 1].flatMap((li) => (["energy", "A", "gJ"] as const).map((k) => perLevel(k, li))), perLevel("B", 1), global("gI"), global("gS"), global("gL"), global("muB_h")];
+    for (const k of knobs) {
+      // relative step 1e-8, as for the single-J point: the located point is good to ~1e-25
+      const h = k.x.abs().mul("1e-8");
+      const a = point(k.set(k.x.plus(h)));
+      const b = point(k.set(k.x.minus(h)));
+      const dB = a.tesla.minus(b.tesla).div(h.mul(2));
+      const dHz = a.hz.minus(b.hz).div(h.mul(2));
+      expect(close(k.pick(s.tesla), dB, "1e-5", new Dec("1e-30")), `dB*/d${k.name}: ${k.pick(s.tesla)} vs ${dB}`).toBe(true);
+      expect(close(k.pick(s.hz), dHz, "1e-5", new Dec("1e-6")), `df*/d${k.name}: ${k.pick(s.hz)} vs ${dHz}`).toBe(true);
+    }
+    // the partner 5²P3/2 moves the point: B* depends on its energy (the single-J solver would give 0 here)
+    expect(s.tesla.energy[1]!.isZero()).toBe(false);
   });
 });
 
