@@ -15,10 +15,11 @@ import { Dec } from "../physics/decimal.js";
 import { hzPerTeslaToMHzPerGauss } from "../physics/zeeman.js";
 import { formatDoubled } from "../physics/quantum.js";
 import type { HyperfineLevelResult, LevelResult, LineResult, SpeciesResult, SublevelShift } from "../results/types.js";
-import { formatFraction, formatM, formatNumber, formatQuantum, partsText, writtenParts } from "./format.js";
+import { formatFraction, formatM, formatNumber, formatQuantum, formatUncertain, partsText, uncertainParts, writtenParts } from "./format.js";
 import type { SpeciesFieldResult } from "../results/computeFields.js";
 import { levelAnchor, lineAnchor } from "./anchors.js";
-import { fractionCell, measuredCell, numberCell, type Cell, type Table, termCell, textCell } from "./table.js";
+import { fractionCell, measuredCell, numberCell, type Cell, type Table, termCell, textCell, uncertainCell } from "./table.js";
+import { lineWavelengthCell, perUnitMU } from "./linearTables.js";
 import { makeTable } from "./tableSpec.js";
 
 /** Significant digits of a per-unit-m shift on a sheet; list values get fewer. */
@@ -26,6 +27,24 @@ export const SHEET_DIGITS = 6;
 export const SHEET_LIST_DIGITS = 4;
 
 const blank = (): Cell => ({ text: "", sort: "" });
+
+/** Most significant digits a value may need to carry its concise uncertainty on a sheet. */
+export const SHEET_CONCISE_DIGITS = 9;
+
+/**
+ * A computed number on a sheet: with its standard uncertainty in the concise
+ * form ("0.499 836 426(50)") when that needs at most SHEET_CONCISE_DIGITS
+ * significant digits; otherwise (an uncertainty far below the sixth digit,
+ * as for an LS gJ whose only uncertain inputs are g_e and the mass) the
+ * value at SHEET_DIGITS, every digit of which is then good, so the sheet
+ * stays on one page. The sheet's rule says so (sheet-parts.njk).
+ */
+export function sheetNumberCell(x: Dec | null, u: Dec | null | undefined): Cell {
+  if (x === null || u === null || u === undefined || u.isZero()) return numberCell(x, SHEET_DIGITS);
+  const p = uncertainParts(x, u);
+  const digits = (p.int + p.frac).replace(/\D/g, "").replace(/^0+/, "").length;
+  return digits <= SHEET_CONCISE_DIGITS ? uncertainCell(x, u, SHEET_DIGITS) : numberCell(x, SHEET_DIGITS);
+}
 
 /**
  * The shift per unit m (MHz/G) of a set of sublevels, from the sublevel of
@@ -103,6 +122,20 @@ export function componentList(ln: LineResult): string {
   return [...groups].map(([label, g]) => `${label} ${[...g.values()].join(", ")}`).join(" · ");
 }
 
+/**
+ * A number in a bench note: in the concise form with its standard
+ * uncertainty when that needs at most `max` significant digits, else at
+ * `sig` digits, each of which the uncertainty then leaves good (an
+ * uncertainty far below the last digit shown, as for the 87Rb ground-state
+ * splitting), so the notes stay short enough for one printed page.
+ */
+export function noteNumber(x: Dec, u: Dec | null | undefined, sig: number, max = sig + 2): string {
+  if (u === null || u === undefined || u.isZero()) return formatNumber(x, sig);
+  const p = uncertainParts(x, u);
+  const digits = (p.int + p.frac).replace(/\D/g, "").replace(/^0+/, "").length;
+  return digits <= max ? formatUncertain(x, u) : formatNumber(x, sig);
+}
+
 /** Field-insensitive transitions listed on a sheet, at most; the level pages list them all. */
 export const SHEET_INSENSITIVE = 6;
 
@@ -118,32 +151,46 @@ export function sheetNotes(s: SpeciesResult, fields: SpeciesFieldResult, maxTesl
   const insensitive: { tesla: Dec; text: string }[] = [];
   const validity: string[] = [];
   for (const l of s.levels) {
+    const f = fields.levels.get(l.input.id);
     const byF = [...l.hyperfine].sort((a, b) => a.F2 - b.F2);
     if (byF.length > 1) {
-      const steps = byF.slice(1).map((h, i) => `${formatQuantum(byF[i]!.F2)}↔${formatQuantum(h.F2)} ${formatNumber(h.zeroFieldHz.sub(byF[i]!.zeroFieldHz).div(MHZ), 9)}`);
+      // a splitting is the zero-field frequency of any sublevel transition between the two F: its uncertainty (A and B shared) is that one's
+      const splitU = (lo: number, up: number) => {
+        const k = f ? f.transitions.findIndex((t) => t.lower.F2 === lo && t.upper.F2 === up) : -1;
+        return k < 0 ? null : f!.transitionsU?.[k]?.zeroFieldHz ?? null;
+      };
+      const steps = byF.slice(1).map((h, i) => {
+        const lo = byF[i]!;
+        const u = splitU(lo.F2, h.F2);
+        return `${formatQuantum(lo.F2)}↔${formatQuantum(h.F2)} ${noteNumber(h.zeroFieldHz.sub(lo.zeroFieldHz).div(MHZ), u ? u.div(MHZ) : null, 9)}`;
+      });
       splittings.push(`${l.input.id}: ${steps.join(", ")} MHz`);
     }
-    const f = fields.levels.get(l.input.id);
     if (!f) continue;
-    for (const t of f.transitions) {
-      if (t.lower.F2 === t.upper.F2) continue;
-      for (const p of t.fieldInsensitive) {
-        if (p.tesla.gt(maxTesla)) continue;
+    f.transitions.forEach((t, k) => {
+      if (t.lower.F2 === t.upper.F2) return;
+      const tu = f.transitionsU?.[k];
+      t.fieldInsensitive.forEach((p, i) => {
+        if (p.tesla.gt(maxTesla)) return;
+        const pu = tu?.fieldInsensitive[i];
         const state = (x: { F2: number; mF2: number }) => `|${formatQuantum(x.F2)}, ${formatM(x.mF2)}⟩`;
-        const quad = t.secondOrder ? `, ${formatNumber(t.secondOrder.hzPerGauss2, 5)} Hz/G² at 0 G` : "";
-        insensitive.push({ tesla: p.tesla, text: `${l.input.id} ${state(t.lower)}↔${state(t.upper)}: ${fieldLabel(p.tesla)}, ${formatNumber(p.hz.div(MHZ), 10)} MHz${quad}` });
-      }
-    }
+        const quadU = tu?.secondOrderHzPerTesla2 ? tu.secondOrderHzPerTesla2.mul("1e-8") : null;
+        const quad = t.secondOrder ? `, ${noteNumber(t.secondOrder.hzPerGauss2, quadU, 5)} Hz/G² at 0 G` : "";
+        const hz = noteNumber(p.hz.div(MHZ), pu?.hz ? pu.hz.div(MHZ) : null, 10);
+        insensitive.push({ tesla: p.tesla, text: `${l.input.id} ${state(t.lower)}↔${state(t.upper)}: ${fieldLabel(p.tesla, pu?.tesla ?? null)}, ${hz} MHz${quad}` });
+      });
+    });
     if (f.validity?.relative.tesla) validity.push(`${l.input.id} ${fieldLabel(f.validity.relative.tesla)}`);
   }
   const shown = insensitive.sort((a, b) => a.tesla.cmp(b.tesla)).slice(0, SHEET_INSENSITIVE).map((x) => x.text);
   return { splittings, insensitive: shown, validity };
 }
 
-/** A field for a sheet: gauss below 0.1 T, tesla from there on, 5 digits. */
-function fieldLabel(tesla: Dec): string {
+/** A field for a sheet: gauss below 0.1 T, tesla from there on, 5 digits (with its uncertainty `u` in T, when given, as noteNumber writes it). */
+function fieldLabel(tesla: Dec, u: Dec | null = null): string {
   if (tesla.isZero()) return "0 G";
-  return tesla.lt("0.1") ? `${formatNumber(tesla.mul("1e4"), 5)} G` : `${formatNumber(tesla, 5)} T`;
+  // a field-insensitive point is often known to a few 1e-6 relative: up to 9 digits keep its uncertainty
+  return tesla.lt("0.1") ? `${noteNumber(tesla.mul("1e4"), u ? u.mul("1e4") : null, 5, 9)} G` : `${noteNumber(tesla, u, 5, 9)} T`;
 }
 
 export function speciesSheet(s: SpeciesResult, opts: SheetOptions, fields?: { result: SpeciesFieldResult; maxTesla: Dec }): SpeciesSheet {
@@ -155,7 +202,12 @@ export function speciesSheet(s: SpeciesResult, opts: SheetOptions, fields?: { re
   };
   const levelRows: SheetLevelRow[] = s.levels.flatMap((level) => [{ level, hf: null }, ...level.hyperfine.map((hf) => ({ level, hf }))]);
   const gCell = (l: LevelResult): Cell =>
-    l.gJ === null ? textCell("—") : l.gJFrom === "measured" && l.input.gJ ? measuredCell(l.input.gJ, l.gJ) : numberCell(l.gJ, SHEET_DIGITS);
+    l.gJ === null ? textCell("—") : l.gJFrom === "measured" && l.input.gJ ? measuredCell(l.input.gJ, l.gJ) : sheetNumberCell(l.gJ, l.gJU);
+  // the shift per unit m with its standard uncertainty (that of the stretched sublevel's shift over J or F), in MHz/G
+  const perMCell = (subs: SublevelShift[], top2: number): Cell => {
+    const u = perUnitMU(subs, top2);
+    return sheetNumberCell(shiftPerM(subs), u === null ? null : hzPerTeslaToMHzPerGauss(u).abs());
+  };
   const sublevels = makeTable<SheetLevelRow>(
     {
       id: `sheet-levels:${s.input.id}`,
@@ -166,9 +218,9 @@ export function speciesSheet(s: SpeciesResult, opts: SheetOptions, fields?: { re
         { key: "level", label: "level", kind: "text", cell: ({ level, hf }) => (hf ? blank() : textCell(level.input.id)) },
         { key: "term", label: "term", kind: "term", cell: ({ level, hf }) => (hf ? blank() : termCell(level.input.term)) },
         { key: "which", label: "J / F", kind: "text", cell: ({ level, hf }) => textCell(hf ? `F = ${formatQuantum(hf.F2)}` : `J = ${formatQuantum(level.J2)}`) },
-        { key: "g", label: "gJ / gF", kind: "number", cell: ({ level, hf }) => (hf ? numberCell(hf.gF, SHEET_DIGITS) : gCell(level)) },
+        { key: "g", label: "gJ / gF", kind: "number", cell: ({ level, hf }) => (hf ? sheetNumberCell(hf.gF, hf.gFU) : gCell(level)) },
         { key: "gLS", label: "gJ, LS exact", kind: "fraction", cell: ({ level, hf }) => (hf ? blank() : fractionCell(level.gJExact)) },
-        { key: "perM", label: "per unit m", unit: "MHz/G", kind: "number", cell: ({ level, hf }) => numberCell(shiftPerM(hf ? hf.sublevels : level.sublevels), SHEET_DIGITS) },
+        { key: "perM", label: "per unit m", unit: "MHz/G", kind: "number", cell: ({ level, hf }) => (hf ? perMCell(hf.sublevels, hf.F2) : perMCell(level.sublevels, level.J2)) },
         { key: "list", label: "shift at m > 0", unit: "MHz/G", kind: "text", when: opts.mList, cell: ({ level, hf }) => list(hf ? hf.sublevels : level.sublevels) },
       ],
     },
@@ -183,12 +235,12 @@ export function speciesSheet(s: SpeciesResult, opts: SheetOptions, fields?: { re
       columns: [
         { key: "line", label: "line", kind: "text", cell: (ln) => textCell(ln.input.id) },
         { key: "transition", label: "upper → lower", kind: "text", when: opts.mList, cell: (ln) => textCell(`${ln.upper.input.id} → ${ln.lower.input.id}`) },
-        { key: "wavelength", label: "λ (vacuum)", unit: "nm", kind: "number", cell: (ln) => (ln.input.wavelength ? wavelengthCell(ln.input.wavelength) : numberCell(null)) },
+        { key: "wavelength", label: "λ (vacuum)", unit: "nm", kind: "number", cell: (ln) => (ln.input.wavelength ? lineWavelengthCell(ln.input, "vacuum") : numberCell(null)) },
         {
           key: "air_wavelength", label: "λ (air)", unit: "nm", kind: "number", when: s.lines.some((ln) => ln.input.wavelength),
-          cell: (ln) => (ln.input.airWavelength ? wavelengthCell(ln.input.airWavelength) : ln.input.wavelength ? textCell("outside the air formula") : numberCell(null)),
+          cell: (ln) => (ln.input.airWavelength ? lineWavelengthCell(ln.input, "air") : ln.input.wavelength ? textCell("outside the air formula") : numberCell(null)),
         },
-        { key: "g_eff", label: "g_eff", kind: "number", cell: (ln) => numberCell(ln.gEff, SHEET_DIGITS) },
+        { key: "g_eff", label: "g_eff", kind: "number", cell: (ln) => sheetNumberCell(ln.gEff, ln.gEffU) },
         { key: "pattern", label: "pattern", kind: "text", cell: (ln) => textCell(ln.pattern === null ? "—" : [ln.pattern, patternLimitTag(ln)].filter(Boolean).join(" — ")) },
         { key: "components", label: "components: shift in Lorentz units (strength)", kind: "text", when: opts.mList, cell: (ln) => textCell(componentList(ln)) },
       ],
@@ -211,12 +263,6 @@ export function speciesSheet(s: SpeciesResult, opts: SheetOptions, fields?: { re
 function writtenText(text: string): string {
   const p = writtenParts(text);
   return p ? partsText(p) : text;
-}
-
-function wavelengthCell(q: { text: string; unit: string; si: Dec }): Cell {
-  const numberText = q.text.trim().slice(0, q.text.trim().length - q.unit.length).trim();
-  const value = q.si.mul("1e9");
-  return q.unit === "nm" ? measuredCell({ value, uncertainty: null, text: numberText }, value, numberText) : numberCell(value, 9);
 }
 
 export interface FieldRule {
