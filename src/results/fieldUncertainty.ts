@@ -21,7 +21,7 @@
  *
  * Worked example: 87Rb 5²S1/2 with the demo's gJ = 2.00233113(20) and
  * gI = −0.0009951414(10): the field-insensitive point of |1,−1⟩ ↔ |2,1⟩
- * at 3.2289 G carries u ≈ 0.0032 G, almost all from gI (test/results/
+ * at 3.2289 G carries u ≈ 3.3 µG (3.3e−10 T), almost all from gI (test/results/
  * fieldUncertainty.test.ts compares it with a Monte Carlo propagation).
  */
 import { Dec, ZERO } from "../physics/decimal.js";
