@@ -143,7 +143,7 @@ export function mJTable(l: LevelResult, home: TableHome): Table {
       anchor: (m) => mJAnchor(lid, m.m2),
       columns: [
         { key: "mJ", label: "mJ", kind: "quantum", cell: (m) => quantumCell(m.m2, true) },
-        { key: "gm", label: "gJ·mJ", kind: "number", cell: (m) => numberCell(l.gJ === null ? new Dec(0) : l.gJ.mul(m.m2).div(2), SHOWN_DIGITS) },
+        { key: "gm", label: "gJ·mJ", kind: "number", cell: (m) => uncertainCell(l.gJ === null ? new Dec(0) : l.gJ.mul(m.m2).div(2), l.gJU ? l.gJU.mul(Math.abs(m.m2)).div(2) : null, SHOWN_DIGITS) },
         ...shiftColumns<(typeof l.sublevels)[number]>((m) => m.shiftHzPerT, (m) => m.shiftHzPerTU),
       ],
     },

@@ -43,7 +43,7 @@ import {
   transitionsTable,
   validityFacts,
 } from "./fieldTables.js";
-import { formatNumber, partsText, writtenParts } from "./format.js";
+import { formatNumber, partsText, writtenParts, formatUncertain } from "./format.js";
 import {
   componentsTable,
   glanceTable,
@@ -242,7 +242,7 @@ export interface SpeciesViewsInput {
 const gIText = (s: SpeciesResult): string => {
   const written = s.input.nucleus?.gI?.text;
   const p = written ? writtenParts(written) : null;
-  return p ? partsText(p) : formatNumber(s.gI, 12);
+  return p ? partsText(p) : formatUncertain(s.gI, s.gIU ?? null, 12);
 };
 
 /** Levels that get a page of their own: those with hyperfine structure (field tables, plots, transitions), and every level once the overview is compacted. */
@@ -271,8 +271,8 @@ export function overviewView(v: SpeciesViewsInput, compact: OverviewCompaction =
   const facts = [
     ...(nucleus ? [{ label: "nuclear spin I", value: formatDoubled(nucleus.I2) }, { label: `gI (${s.gIFrom === "moment" ? "from μ" : "given"})`, value: gIText(s) }] : []),
     ...(s.input.mass ? [{ label: "mass", value: s.input.mass.text }] : []),
-    { label: "gL", value: formatNumber(s.gL, 12) },
-    { label: "gS", value: formatNumber(s.gS, 15) },
+    { label: "gL", value: formatUncertain(s.gL, s.gLU ?? null, 12) },
+    { label: "gS", value: formatUncertain(s.gS, s.gSU ?? null, 15) },
   ];
   return {
     kind: "overview",
@@ -292,7 +292,7 @@ export function overviewView(v: SpeciesViewsInput, compact: OverviewCompaction =
       lineId: ln.input.id,
       url: `/${linePagePath(id, ln.input.id)}`,
       pattern: ln.pattern ?? "—",
-      gEff: ln.gEff === null ? `— (${ln.gEffNote ?? "not defined"})` : formatNumber(ln.gEff, SHOWN_DIGITS),
+      gEff: ln.gEff === null ? `— (${ln.gEffNote ?? "not defined"})` : formatUncertain(ln.gEff, ln.gEffU ?? null, SHOWN_DIGITS),
       summary: ln.summary,
       couplingNote: lineCouplingNote(ln),
       sketch: patternSketchSvg(`sketch-${safeFile(ln.input.id)}`, ln.input.id, ln.components.map((c) => ({ lorentz: c.shiftLorentz, strength: c.strength.toDecimal(), polarization: c.polarization }))),
