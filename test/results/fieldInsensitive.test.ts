@@ -60,7 +60,8 @@ describe("field-insensitive points", () => {
       (t) => t.lower.F === "1" && t.lower.mF === "0" && t.upper.F === "2" && t.upper.mF === "0",
     )!;
     // mF = 0 ↔ mF = 0 is first-order field-insensitive at B = 0 (common practice); 2A = 6834.68261090429 MHz (Steck)
-    expect(clock.field_insensitive[0]).toEqual({ B_T: "0", Hz: "6834682610.90429" });
+    // A is given here without an uncertainty and B = 0 holds for every input: both _u keys are null (README, "Uncertainties")
+    expect(clock.field_insensitive[0]).toEqual({ B_T: "0", B_T_u: null, Hz: "6834682610.90429", Hz_u: null });
   });
 
   it("searches up to twice the largest configured field when that exceeds 1 T", () => {
