@@ -151,7 +151,8 @@ export interface LineFieldResult {
   /**
    * Standard uncertainty (Hz; null: exact) of each hyperfine group offset and
    * lock point offset, by fieldUncertainty.lockKey(Fl2s, Fu2s); a group is the
-   * lock point with one F on each side.
+   * lock point with one F on each side. A crossover's pair spacing is under
+   * "spacing " + lockKey.
    */
   hyperfineOffsetU?: Map<string, Dec | null>;
   /** Standard uncertainties of each hyperfine group's gF values and components' shifts (Hz/T), in the order of `hyperfine`. */

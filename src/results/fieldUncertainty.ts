@@ -207,7 +207,9 @@ export const lockKey = (Fl2: readonly number[], Fu2: readonly number[]): string 
  * of its two groups' offsets (kept as uncertain numbers, so a shared A
  * counts once), by lockKey. Exact coefficients; worked example: the 87Rb D2
  * group F = 2 → F′ = 3 has offset 9A′/4 + B′/4 − 3A/4, so its u is
- * √((9u(A′)/4)² + (u(B′)/4)² + (3u(A)/4)²).
+ * √((9u(A′)/4)² + (u(B′)/4)² + (3u(A)/4)²). A crossover's pair spacing
+ * (the difference of its two groups, where a shared level's constants
+ * cancel) is under "spacing " + lockKey.
  */
 export function hyperfineOffsetsU(
   I2: number, upper: { J2: number; p: LevelParamsU }, lower: { J2: number; p: LevelParamsU }, points: readonly { Fl2: number[]; Fu2: number[] }[],
@@ -222,6 +224,8 @@ export function hyperfineOffsetsU(
     const combos = pt.Fl2.flatMap((l) => pt.Fu2.map((u) => group(l, u)));
     const mean = linear(combos.map((g) => [new Dec(1).div(combos.length), g] as [Dec, Uncertain]));
     out.set(lockKey(pt.Fl2, pt.Fu2), uOf(mean));
+    // a crossover's pair spacing |a − b| of its two groups (the sign does not change u), under the key with a "spacing" prefix
+    if (combos.length === 2) out.set(`spacing ${lockKey(pt.Fl2, pt.Fu2)}`, uOf(minus(combos[0]!, combos[1]!)));
   }
   return out;
 }

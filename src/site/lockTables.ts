@@ -120,7 +120,7 @@ export function lockView(ln: LineResult, groups: HyperfineLineGroup[] | null, ho
         { key: "lambda_air", label: "air wavelength", unit: "nm", kind: "number", cell: (p) => airWavelengthOfCell(p.frequencyHz) },
         { key: "off", label: "offset from line centre", unit: "MHz", kind: "number", cell: (p) => mhzCell(p.offset, offU(p)) },
         { key: "S", label: "strength (of line)", kind: "fraction", cell: (p) => fractionCell(p.strength) },
-        { key: "pair", label: "pair spacing", unit: "MHz", kind: "number", cell: (p) => mhzCell(p.kind === "crossover" ? p.spacing : null) },
+        { key: "pair", label: "pair spacing", unit: "MHz", kind: "number", cell: (p) => mhzCell(p.kind === "crossover" ? p.spacing : null, p.kind === "crossover" ? offsetU?.get(`spacing ${lockKey(p.Fl2, p.Fu2)}`) ?? null : null) },
         {
           key: "ref", label: "offset from reference", unit: "MHz", kind: "number",
           cell: (p) => {

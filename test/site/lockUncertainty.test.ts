@@ -58,6 +58,10 @@ describe("uncertainties of the hyperfine and lock-point tables (87Rb D2)", () =>
     // 384.228 115 2 THz (Steck, from memory); the demo wavelength has no uncertainty, so ν carries the offset's 4.6 kHz = 0.0000000046 THz
     expect(plain(nu.cell.text)).toMatch(/^384\.2281152\d*\(46\)$/);
     expect(ref.cell.parts?.unc).toBeUndefined();
+    // the crossover F = 2 → F′ = 2/3 lies between 2 → 2 and 2 → 3: spacing E(F′=3) − E(F′=2) = 3A′ + B′ (Casimir formula, textbook),
+    // ground-state A cancels: u = √((3·2.0)² + 3.7²) kHz = 7.0 kHz (Steck's u(A′), u(B′), from memory)
+    const pair = cell(v.table, "F=2-to-F=2,3", "pair");
+    expect(plain(pair.cell.text)).toBe("266.6520(70)");
     expect(ref.cell.hz).toBeDefined();
   });
 
