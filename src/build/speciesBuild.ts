@@ -89,6 +89,7 @@ function tablesOf(view: PageView): Table[] {
         ...(view.hyperfine ? [view.hyperfine, view.hyperfineComponents!] : []),
         ...(view.lock ? [view.lock.table] : []),
         ...(view.wavelengthSplit ? [view.wavelengthSplit.table] : []),
+        view.observer.factors,
         ...(view.atFields ?? []).flatMap((a) => (a.table ? [a.table] : [])),
       ];
     case "line-field":

@@ -192,7 +192,7 @@ export function angularFormulaText(k: number, q: number): string {
   angularCoefficients(k, q).forEach((c, n) => {
     if (c[0] === 0n) return;
     const mag = fractionText([c[0] < 0n ? -c[0] : c[0], c[1]]);
-    const power = n === 0 ? "" : n === 1 ? "cos²θ" : `cos${n === 2 ? "⁴" : n === 3 ? "⁶" : `^${2 * n}`}θ`;
+    const power = n === 0 ? "" : n === 1 ? "cos²θ" : `cos${String(2 * n).replace(/\d/g, (d) => "⁰¹²³⁴⁵⁶⁷⁸⁹"[Number(d)]!)}θ`;
     const body = n === 0 ? mag : mag === "1" ? power : `${mag} ${power}`;
     terms.push(terms.length === 0 ? (c[0] < 0n ? `−${body}` : body) : `${c[0] < 0n ? "−" : "+"} ${body}`);
   });

@@ -13,6 +13,9 @@ import { observerPlotSvg, type ObserverStick } from "./plots/observerPlot.js";
 import { textCell, type Table } from "./table.js";
 import { makeTable } from "./tableSpec.js";
 
+/** Superscript digits, so the page writes d² and not a caret power. */
+const superscript = (n: number) => String(n).replace(/\d/g, (d) => "⁰¹²³⁴⁵⁶⁷⁸⁹"[Number(d)]!);
+
 export const lineObserverAnchor = (lineId: string) => `line:${lineId}-observer`;
 
 export interface ObserverView {
@@ -84,7 +87,7 @@ export function observerView(ln: LineResult, home: TableHome): ObserverView {
   const senseText =
     `Seen along the field (θ = 0, the field pointing toward the observer), σ+ (Δm = m_upper − m_lower = +1) is ${circularSense(1)}; ` +
     `σ− is ${circularSense(-1)}. Seen against the field (θ = 180°) both reverse. ` +
-    `F(θ) = Σ_{λ=±1} |d^${k}_{Δm,λ}(θ)|² = 8π/${2 * k + 1}·|X_${k},Δm(θ)|² (vector spherical harmonic; the same for electric and magnetic multipoles of rank ${k}), ` +
+    `F(θ) = Σ over λ = ±1 of |d${superscript(k)}(Δm, λ; θ)|² = 8π/${2 * k + 1}·|X(${k}, Δm; θ)|² (d the Wigner small-d matrix of rank ${k}, X the vector spherical harmonic; the same for electric and magnetic multipoles of rank ${k}), ` +
     `so F averages to 2/${2 * k + 1} over all directions for every Δm and the strengths keep their meaning for light collected from every direction.`;
   const sticks: ObserverStick[] = ln.components.map((c) => ({
     q: c.deltaM,
