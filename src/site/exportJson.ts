@@ -109,6 +109,14 @@ function levelFieldExport(f: LevelFieldResult, fields: ConfiguredField[]) {
 /** An absolute frequency ν0 + offset (Hz), or null when the line has no wavelength (lockPoints.ts). */
 const absolute = (nu0: Dec | null, offset: Dec) => (nu0 === null ? null : absoluteFrequency(nu0, offset));
 
+/** vacuum_wavelength_m = c/ν of a group and its _u = λ·u(ν)/ν (∂λ/∂ν = −c/ν², c exact); null without a wavelength. */
+function groupWavelength(nu0: Dec | null, offset: Dec, uHz: Dec | null) {
+  if (nu0 === null) return withU("vacuum_wavelength_m", null, null);
+  const nu = absoluteFrequency(nu0, offset);
+  const lambda = vacuumWavelength(nu, SPEED_OF_LIGHT);
+  return withU("vacuum_wavelength_m", lambda, uHz === null ? null : lambda.mul(uHz).div(nu));
+}
+
 /** F values of a lock point: the shared level as a string, the pair as a two-element array. */
 const lockLevels = (F2: number[]) => (F2.length === 1 ? formatDoubled(F2[0]!) : F2.map(formatDoubled));
 
@@ -126,7 +134,10 @@ function lineFieldExport(f: LineFieldResult, nu0: Dec | null, nu0U: Dec | null) 
         lower: c.lowerLabel,
         delta_m: c.q,
         polarization: c.polarization,
+        // the strength at a field follows the eigenvectors: its uncertainty is not propagated (README "Uncertainties")
         relative_strength: exportText(c.strength, 20),
+        relative_strength_u: null,
+        relative_strength_uncertainty: "not propagated",
         ...withU("shift_Hz", c.shiftHz, c.shiftHzU),
         ...withU("frequency_Hz", absolute(nu0, c.shiftHz), rss(c.shiftHzU, nu0U)),
       })),
@@ -138,7 +149,7 @@ function lineFieldExport(f: LineFieldResult, nu0: Dec | null, nu0U: Dec | null) 
           strength: g.strength.toString(),
           ...withU("offset_Hz", g.offset, offU([g.Fl2], [g.Fu2])),
           ...withU("frequency_Hz", absolute(nu0, g.offset), rss(offU([g.Fl2], [g.Fu2]), nu0U)),
-          vacuum_wavelength_m: nu0 === null ? null : num(vacuumWavelength(absoluteFrequency(nu0, g.offset), SPEED_OF_LIGHT)),
+          ...groupWavelength(nu0, g.offset, rss(offU([g.Fl2], [g.Fu2]), nu0U)),
           components: g.components.map((c, ci) => ({
             mF_upper: formatDoubled(c.mFu2),
             mF_lower: formatDoubled(c.mFl2),

@@ -113,6 +113,16 @@ describe("uncertainties of the weak-field hyperfine components and the linear li
     expect(dec(c.shift_Hz_per_T_u).div(hand).sub(1).abs().lt("1e-9")).toBe(true);
   });
 
+  it("give a group's vacuum wavelength the uncertainty λ·u(ν)/ν (∂λ/∂ν = −c/ν², textbook), and mark strengths at a field as not propagated", () => {
+    const g = line(rb, "D2").hyperfine_groups.find((x: Json) => x.F_lower === "2" && x.F_upper === "3");
+    const want = dec(g.vacuum_wavelength_m).mul(g.frequency_Hz_u).div(g.frequency_Hz);
+    expect(dec(g.vacuum_wavelength_m_u).sub(want).abs().lt(want.mul("1e-25"))).toBe(true);
+    // 4.6 kHz at 384 THz is 1.2e-11 relative: 9.3e-18 m at 780 nm (hand arithmetic)
+    expect(dec(g.vacuum_wavelength_m_u).toNumber()).toBeCloseTo(9.33e-18, 19);
+    const c = line(rb, "D2").at_fields[1].components[0];
+    expect([c.relative_strength_u, c.relative_strength_uncertainty]).toEqual([null, "not propagated"]);
+  });
+
   it("mark the limits of the linear regime as not propagated, their _u keys null", () => {
     const lv = rb.levels.find((l: Json) => l.id === "5s-S1/2");
     expect(lv.linear_validity.uncertainty).toBe("not propagated");
