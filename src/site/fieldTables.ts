@@ -284,7 +284,7 @@ export function hyperfineGroupsTable(ln: LineResult, groups: HyperfineLineGroup[
         { key: "Sl", label: "share of lower F", kind: "fraction", cell: (g) => fractionCell(g.shareOfLower) },
         { key: "off", label: "offset from line centre", unit: "MHz", kind: "number", cell: (g) => uncertainCell(g.offset.div(MHZ), offU(g)?.div(MHZ) ?? null, 10) },
         { key: "nu", label: "frequency", unit: "THz", kind: "number", when: nu0 !== null, cell: (g) => frequencyCell(absoluteFrequency(nu0!, g.offset), rss(offU(g), ln.frequencyHzU)) },
-        { key: "lambda", label: "vacuum wavelength", unit: "nm", kind: "number", when: nu0 !== null, cell: (g) => wavelengthCell(absoluteFrequency(nu0!, g.offset)) },
+        { key: "lambda", label: "vacuum wavelength", unit: "nm", kind: "number", when: nu0 !== null, cell: (g) => wavelengthCell(absoluteFrequency(nu0!, g.offset), rss(offU(g), ln.frequencyHzU)) },
         { key: "lambda_air", label: "air wavelength", unit: "nm", kind: "number", when: nu0 !== null, cell: (g) => airWavelengthOfCell(absoluteFrequency(nu0!, g.offset)) },
         { key: "gFu", label: "gF upper", kind: "number", cell: (g) => uncertainCell(g.gFu, gU(g)?.gFu ?? null, 9) },
         { key: "gFl", label: "gF lower", kind: "number", cell: (g) => uncertainCell(g.gFl, gU(g)?.gFl ?? null, 9) },

@@ -41,7 +41,6 @@ export function absoluteDigits(hz: Dec): number {
 export const frequencyCell = (hz: Dec | null, u: Dec | null = null): Cell =>
   uncertainCell(hz === null ? null : hz.div(THZ), u === null ? null : u.div(THZ), hz === null ? 1 : absoluteDigits(hz));
 
-/** A vacuum wavelength c/ν in nm, with as many significant digits as the frequency beside it. */
 /**
  * The standard-air wavelength of c/ν in nm (physics/airWavelength.ts), to 9
  * significant digits: the air formula holds to about 1e-8 in n, so more
@@ -53,7 +52,16 @@ export function airWavelengthOfCell(hz: Dec | null): Cell {
   return inAirFormulaRange(vac) ? numberCell(vacuumToAir(vac).div(NM), 9) : textCell("outside the range of the air formula");
 }
 
-export const wavelengthCell = (hz: Dec | null): Cell => numberCell(hz === null ? null : vacuumWavelength(hz, SPEED_OF_LIGHT).div(NM), hz === null ? 1 : absoluteDigits(hz));
+/**
+ * A vacuum wavelength c/ν in nm, with as many significant digits as the
+ * frequency beside it, and its uncertainty λ·u(ν)/ν (∂λ/∂ν = −c/ν², c
+ * exact) when u(ν) (Hz) is given.
+ */
+export function wavelengthCell(hz: Dec | null, uHz: Dec | null = null): Cell {
+  if (hz === null) return numberCell(null);
+  const nm = vacuumWavelength(hz, SPEED_OF_LIGHT).div(NM);
+  return uncertainCell(nm, uHz === null ? null : nm.mul(uHz).div(hz.abs()), absoluteDigits(hz));
+}
 
 /**
  * A frequency in Hz shown in MHz to 1 kHz, as the offset-from-reference
@@ -116,7 +124,7 @@ export function lockView(ln: LineResult, groups: HyperfineLineGroup[] | null, ho
         { key: "Fl", label: "F lower", kind: "text", cell: (p) => textCell(levels(p.Fl2)) },
         { key: "Fu", label: "F′ upper", kind: "text", cell: (p) => textCell(levels(p.Fu2)) },
         { key: "nu", label: "frequency", unit: "THz", kind: "number", cell: (p) => frequencyCell(p.frequencyHz, rss(offU(p), ln.frequencyHzU)) },
-        { key: "lambda", label: "vacuum wavelength", unit: "nm", kind: "number", cell: (p) => wavelengthCell(p.frequencyHz) },
+        { key: "lambda", label: "vacuum wavelength", unit: "nm", kind: "number", cell: (p) => wavelengthCell(p.frequencyHz, rss(offU(p), ln.frequencyHzU)) },
         { key: "lambda_air", label: "air wavelength", unit: "nm", kind: "number", cell: (p) => airWavelengthOfCell(p.frequencyHz) },
         { key: "off", label: "offset from line centre", unit: "MHz", kind: "number", cell: (p) => mhzCell(p.offset, offU(p)) },
         { key: "S", label: "strength (of line)", kind: "fraction", cell: (p) => fractionCell(p.strength) },

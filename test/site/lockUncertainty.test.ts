@@ -58,6 +58,9 @@ describe("uncertainties of the hyperfine and lock-point tables (87Rb D2)", () =>
     // 384.228 115 2 THz (Steck, from memory); the demo wavelength has no uncertainty, so ν carries the offset's 4.6 kHz = 0.0000000046 THz
     expect(plain(nu.cell.text)).toMatch(/^384\.2281152\d*\(46\)$/);
     expect(ref.cell.parts?.unc).toBeUndefined();
+    // λ = c/ν with u(λ) = λ·u(ν)/ν: 780.246 nm × 4594 Hz / 384.228 THz = 9.3e−9 nm (hand arithmetic)
+    const lambda = cell(v.table, "F=2-to-F=3", "lambda");
+    expect(plain(lambda.cell.text)).toMatch(/^780\.24602088\d*\(93\)$/);
     // the crossover F = 2 → F′ = 2/3 lies between 2 → 2 and 2 → 3: spacing E(F′=3) − E(F′=2) = 3A′ + B′ (Casimir formula, textbook),
     // ground-state A cancels: u = √((3·2.0)² + 3.7²) kHz = 7.0 kHz (Steck's u(A′), u(B′), from memory)
     const pair = cell(v.table, "F=2-to-F=2,3", "pair");
