@@ -62,7 +62,7 @@ export function atFromResults(s: SpeciesResult, f: SpeciesFieldResult, field: Co
           relative_strength: exportText(c.strength, 20),
           // as in the export: the strength at a field follows the eigenvectors, its uncertainty is not propagated
           relative_strength_u: null,
-          relative_strength_uncertainty: "not propagated",
+          relative_strength_u_note: "not propagated",
           shift_Hz: num(c.shiftHz),
           shift_Hz_u: numU(c.shiftHzU),
           frequency_Hz: ln.frequencyHz === null ? null : num(absoluteFrequency(ln.frequencyHz, c.shiftHz)),

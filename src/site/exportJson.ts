@@ -137,7 +137,7 @@ function lineFieldExport(f: LineFieldResult, nu0: Dec | null, nu0U: Dec | null) 
         // the strength at a field follows the eigenvectors: its uncertainty is not propagated (README "Uncertainties")
         relative_strength: exportText(c.strength, 20),
         relative_strength_u: null,
-        relative_strength_uncertainty: "not propagated",
+        relative_strength_u_note: "not propagated",
         ...withU("shift_Hz", c.shiftHz, c.shiftHzU),
         ...withU("frequency_Hz", absolute(nu0, c.shiftHz), rss(c.shiftHzU, nu0U)),
       })),

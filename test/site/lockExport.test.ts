@@ -120,7 +120,7 @@ describe("uncertainties of the weak-field hyperfine components and the linear li
     // 4.6 kHz at 384 THz is 1.2e-11 relative: 9.3e-18 m at 780 nm (hand arithmetic)
     expect(dec(g.vacuum_wavelength_m_u).toNumber()).toBeCloseTo(9.33e-18, 19);
     const c = line(rb, "D2").at_fields[1].components[0];
-    expect([c.relative_strength_u, c.relative_strength_uncertainty]).toEqual([null, "not propagated"]);
+    expect([c.relative_strength_u, c.relative_strength_u_note]).toEqual([null, "not propagated"]);
   });
 
   it("mark the limits of the linear regime as not propagated, their _u keys null", () => {
