@@ -39,8 +39,16 @@ describe("standard uncertainties of the linear numbers", () => {
     // 5²P1/2, A = 408.328(15) MHz (Steck): F = 2 lies at +3A/4 (J = 1/2, I = 3/2; textbook interval rule), so u = 3/4 · 15 kHz
     const f2 = level("5p-P1/2").hyperfine.find((h) => h.F2 === 4)!;
     close(f2.zeroFieldHzU!, dec("11250"));
-    // A of 5²S1/2 is given without an uncertainty: its energies are exact here
-    expect(level("5s-S1/2").hyperfine[0]!.zeroFieldHzU).toBeNull();
+    // 5²S1/2, A = 3417.341305452145(45) MHz (demo data, Steck, uncertainty from memory): F = 1 lies at −5A/4, so u = 5/4 · 45 µHz
+    close(level("5s-S1/2").hyperfine.find((h) => h.F2 === 2)!.zeroFieldHzU!, dec("0.00005625"));
+    // a level without hyperfine constants has exact zero-field energies (A = B = 0): none of 87Rb's; a synthetic one
+    const { result } = computeFrom(`id: x
+label: "X"
+nucleus: { spin: 3/2, gI: "-0.0009951414(10)" }
+levels:
+  - { id: a, config: 5s, term: 2S1/2, source: test }
+`);
+    expect(result.levels[0]!.hyperfine.every((h) => (h.zeroFieldHzU ?? null) === null)).toBe(true);
   });
 
   it("propagates gL and gS into an LS gJ, and leaves a J = 0 level without one", () => {
