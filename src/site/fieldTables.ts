@@ -221,6 +221,19 @@ export function transitionsTable(
   );
 }
 
+/**
+ * A component's wavelength shift in pm, Δλ = −Δν·λ/ν = −Δν·λ²/c, with its
+ * standard uncertainty: Δν and λ share no input, so
+ * u(Δλ)² = (λ/ν·u(Δν))² + (2Δν/ν·u(λ))² (∂Δλ/∂λ = −2Δν·λ/c = −2Δν/ν).
+ */
+function wavelengthShiftCell(shiftHz: Dec, shiftU: Dec | null, lambda: Dec, lambdaU: Dec | null, nu: Dec) {
+  const pm = new Dec("1e12");
+  const value = shiftHz.neg().mul(lambda).div(nu).mul(pm);
+  const fromShift = shiftU ? shiftU.mul(lambda).div(nu).mul(pm) : null;
+  const fromLambda = lambdaU && !shiftHz.isZero() ? shiftHz.abs().mul(2).mul(lambdaU).div(nu).mul(pm) : null;
+  return uncertainCell(value, rss(fromShift, fromLambda), 6);
+}
+
 /** What is said about a fine-structure term treated in the Paschen–Back solver. */
 export function termFacts(t: TermFieldResult): string[] {
   return [
@@ -343,7 +356,7 @@ export function atFieldTable(ln: LineResult, a: LineAtFieldResult, home: TableHo
         { key: "nu", label: "frequency", unit: "THz", kind: "number", when: ln.frequencyHz !== null, cell: (c) => frequencyCell(absoluteFrequency(ln.frequencyHz!, c.shiftHz), rss(c.shiftHzU, ln.frequencyHzU)) },
         {
           key: "dl", label: "wavelength shift", unit: "pm", kind: "number",
-          cell: (c) => numberCell(wavelength && ln.frequencyHz ? c.shiftHz.neg().mul(wavelength.si).div(ln.frequencyHz).mul("1e12") : null, 6),
+          cell: (c) => (wavelength && ln.frequencyHz ? wavelengthShiftCell(c.shiftHz, c.shiftHzU ?? null, wavelength.si, wavelength.siUncertainty, ln.frequencyHz) : numberCell(null)),
         },
       ],
     },
