@@ -179,7 +179,12 @@ export function transitionsTable(
     const p = t.fieldInsensitive[k]!;
     const pu = uOf.get(t)?.fieldInsensitive[k];
     const hz = `${formatUncertain(p.hz.div(MHZ), scaled(pu?.hz, new Dec(1).div(MHZ)), 12)} MHz`;
-    const where = p.tesla.gt(0) && p.tesla.lt("0.1") ? `${formatUncertain(p.tesla.div(GAUSS), scaled(pu?.tesla, new Dec(1).div(GAUSS)), 7)} G` : fieldText(p.tesla, 7);
+    // gauss below 0.1 T, tesla from there on (as fieldText), each with its uncertainty
+    const where = p.tesla.isZero()
+      ? fieldText(p.tesla, 7)
+      : p.tesla.lt("0.1")
+        ? `${formatUncertain(p.tesla.div(GAUSS), scaled(pu?.tesla, new Dec(1).div(GAUSS)), 7)} G`
+        : `${formatUncertain(p.tesla, pu?.tesla ?? null, 7)} T`;
     return `${where} (${hz})${pu && !pu.propagated ? " (uncertainty not propagated)" : ""}`;
   };
   return makeTable<SublevelTransition>(
