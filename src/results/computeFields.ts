@@ -26,9 +26,12 @@ import { termSublevelTransitions } from "../physics/field/termSublevelTransition
 import { prepareTerm, termHyperfineZeemanSolver, type PreparedTerm, type TermFieldState, type TermProblem } from "../physics/field/termHyperfineZeeman.js";
 import { termHyperfineZeemanFloatSolver } from "../physics/field/termHyperfineZeemanFloat.js";
 import {
+  fineStructureShiftSlopes,
   fitSpinOrbit,
   fineStructureSolver,
   linearPatternLimit,
+  spinOrbitSlopes,
+  type FineStructureState,
   type FineStructureTerm,
 } from "../physics/field/fineStructure.js";
 import {
@@ -297,7 +300,28 @@ function lsTermOf(l: LevelResult): LSTerm {
 }
 
 /** Group levels into LS terms whose every J is listed with an energy. */
-function fineStructureTerms(s: SpeciesResult, c: ConstantsEdition, fields: ConfiguredField[]): { term: TermFieldResult; levels: LevelResult[] }[] {
+/**
+ * Standard uncertainties of a fine-structure term's state shifts and of its
+ * spin–orbit constant: the Hellmann–Feynman slopes (fineStructureShiftSlopes)
+ * and the fit's slopes (spinOrbitSlopes) chained to the partners' energies,
+ * gL, gS and μB/h as uncertain inputs (shared keys, so correlations stay).
+ */
+function fineStructureUncertainties(term: FineStructureTerm, levels: LevelResult[], atFields: FineStructureState[][], fields: ConfiguredField[], inputs: SpeciesInputs) {
+  const energyOf = new Map(levels.map((l) => [l.J2, inputs.level(l.input.id).energy ?? exact(l.input.energy!.si)]));
+  const atFieldsU = atFields.map((states, i) =>
+    states.map((st) => {
+      const d = fineStructureShiftSlopes(term, st, fields[i]!.tesla);
+      const slopes: [Dec, Uncertain][] = [...d.energies].map(([J2, k]) => [k, energyOf.get(J2)!]);
+      slopes.push([d.gL, inputs.gL], [d.gS, inputs.gS], [d.muB_h, inputs.muB_h]);
+      return uOf(derived(st.shift, slopes));
+    }),
+  );
+  const zs = spinOrbitSlopes(term);
+  const zetaU = zs ? uOf(derived(ZERO, [...zs].map(([J2, k]) => [k, energyOf.get(J2)!] as [Dec, Uncertain]))) : null;
+  return { atFieldsU, zetaU };
+}
+
+function fineStructureTerms(s: SpeciesResult, c: ConstantsEdition, fields: ConfiguredField[], inputs: SpeciesInputs): { term: TermFieldResult; levels: LevelResult[] }[] {
   const groups = new Map<string, LevelResult[]>();
   for (const l of s.levels) {
     // the term solver treats LS terms only; a jK or jj level is solved within its own J
@@ -324,6 +348,7 @@ function fineStructureTerms(s: SpeciesResult, c: ConstantsEdition, fields: Confi
     };
     // bases, Clebsch–Gordan products and Zeeman diagonal prepared once for all configured fields
     const solveAt = fineStructureSolver(term);
+    const atFields = fields.map((f) => solveAt(f.tesla));
     const energies = levels.map((l) => l.input.energy!.si).sort((a, b) => a.cmp(b));
     let interval = ZERO;
     for (let i = 1; i < energies.length; i++) interval = Dec.max(interval, energies[i]!.sub(energies[i - 1]!));
@@ -337,7 +362,8 @@ function fineStructureTerms(s: SpeciesResult, c: ConstantsEdition, fields: Confi
         L,
         fit: fitSpinOrbit(term),
         limit: linearPatternLimit(term),
-        atFields: fields.map((f) => solveAt(f.tesla)),
+        atFields,
+        ...fineStructureUncertainties(term, levels, atFields, fields, inputs),
         paschenBackTesla: interval.isZero() ? null : interval.div(val(c.muB_h)),
       },
     });
@@ -412,7 +438,8 @@ function componentsOf(
 export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: ConfiguredField[]): SpeciesFieldResult {
   // the plot fields depend on the configured fields only: one grid for every level
   const grid = plotGrid(fields);
-  const grouped = fineStructureTerms(s, c, fields);
+  const inputs = speciesInputs(s.input, c);
+  const grouped = fineStructureTerms(s, c, fields, inputs);
   const terms = grouped.map((g) => g.term);
   const termOf = new Map<string, TermFieldResult>();
   for (const t of terms) for (const id of t.levelIds) termOf.set(id, t);
@@ -424,7 +451,6 @@ export function computeFields(s: SpeciesResult, c: ConstantsEdition, fields: Con
     const ts: TermSolve = { term: g.term, prepared, index: new Map(g.levels.map((l, i) => [l.input.id, i])), atFields: fields.map((f) => solve(f.tesla)) };
     for (const l of g.levels) solves.set(l.input.id, ts);
   }
-  const inputs = speciesInputs(s.input, c);
   const computed = new Map(s.levels.map((l) => [l.input.id, levelFields(s, l, c, fields, grid, solves.get(l.input.id), inputs)]));
   const levels = new Map([...computed].map(([id, x]) => [id, x.result]));
 

@@ -103,6 +103,10 @@ export interface TermFieldResult {
   limit: LinearLimit | null;
   /** States at each configured field. */
   atFields: FineStructureState[][];
+  /** Standard uncertainty (Hz) of each state's shift at each field (same order; null when exact). */
+  atFieldsU?: (Dec | null)[][];
+  /** Standard uncertainty (Hz) of the fitted ζ, from the partners' energies; null when exact or without ζ. */
+  zetaU?: Dec | null;
   /** Field scale of the fine-structure Paschen–Back regime: largest interval / (μB/h). */
   paschenBackTesla: Dec | null;
 }

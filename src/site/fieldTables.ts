@@ -244,7 +244,7 @@ export function termFacts(t: TermFieldResult): string[] {
   return [
     `Fine-structure partners: ${t.levelIds.join(", ")}.`,
     t.fit.zeta
-      ? `Spin–orbit constant ζ/h = ${formatNumber(t.fit.zeta.div("1e9"), 9)} GHz from the listed energies${t.levelIds.length > 2 ? ` (interval-rule residual, rms: ${formatNumber(t.fit.rms.div("1e9"), 4)} GHz)` : ""}.`
+      ? `Spin–orbit constant ζ/h = ${formatUncertain(t.fit.zeta.div("1e9"), t.zetaU ? t.zetaU.div("1e9") : null, 9)} GHz from the listed energies${t.levelIds.length > 2 ? ` (interval-rule residual, rms: ${formatNumber(t.fit.rms.div("1e9"), 4)} GHz)` : ""}.`
       : "Spin–orbit constant: not defined for this term.",
     `The J-resolved linear pattern is off by more than 1 % from ${t.limit ? fieldText(t.limit.tesla) : "no field below the searched range"}${t.limit ? ` (first: J = ${formatDoubled(t.limit.J2)}, mJ = ${formatDoubled(t.limit.mJ2)})` : ""}.`,
     ...(t.paschenBackTesla ? [`Fine-structure Paschen–Back scale (largest interval over μB/h): ${fieldText(t.paschenBackTesla)}.`] : []),
@@ -269,7 +269,7 @@ export function termTable(t: TermFieldResult, fields: ConfiguredField[], home: T
         { key: "mS", label: "high-field mS", kind: "quantum", cell: (st) => quantumCell(st.mS2, true) },
         ...fields.map((b, i) => ({
           key: `E${i}`, label: `shift at ${b.text}`, unit: "MHz", kind: "number" as const,
-          cell: (_st: FineStructureState, k: number) => numberCell(t.atFields[i]![k]!.shift.div(MHZ), 12),
+          cell: (_st: FineStructureState, k: number) => uncertainCell(t.atFields[i]![k]!.shift.div(MHZ), t.atFieldsU?.[i]?.[k]?.div(MHZ) ?? null, 12),
         })),
       ],
     },

@@ -355,3 +355,73 @@ export function linearPatternLimit(term: FineStructureTerm, tolerance: Dec = new
 
 /** Significant digits kept of the float64-bisected limit field (good to about 6). */
 const REPORTED_DIGITS = 7;
+
+/** Partial derivatives of one state's shift (Hz) with respect to the term's parameters. */
+export interface FineStructureShiftSlopes {
+  /** ∂shift/∂E_J' for every partner J' (doubled J → dimensionless slope). */
+  energies: Map<number, Dec>;
+  /** ∂shift/∂gL, ∂shift/∂gS (Hz). */
+  gL: Dec;
+  gS: Dec;
+  /** ∂shift/∂(μB/h) (T). */
+  muB_h: Dec;
+}
+
+/**
+ * Slopes of a state's shift, energy − E_J(own), by the Hellmann–Feynman
+ * theorem: H = Σ_J E_J·P_J + (μB/h)·B·(gL·mL + gS·mS) is linear in each
+ * parameter, so ∂E/∂p = ⟨ψ|∂H/∂p|ψ⟩ on the eigenvector:
+ *   ∂E/∂E_J' = ⟨P_J'⟩ = (amplitude on |J' mJ⟩)²,
+ *   ∂E/∂gL = (μB/h)·B·⟨mL⟩,  ∂E/∂gS = (μB/h)·B·⟨mS⟩,
+ *   ∂E/∂(μB/h) = B·⟨gL·mL + gS·mS⟩,
+ * and the shift subtracts E_J of its own level (slope 1 less on it).
+ * Reference: H. Hellmann, "Einführung in die Quantenchemie" (1937);
+ * R. P. Feynman, Phys. Rev. 56, 340 (1939). Non-degenerate states only: a
+ * block of this Hamiltonian has no crossings (see solveFineStructure), so
+ * within each mJ block the states stay non-degenerate, and at B = 0 the
+ * eigenvectors are the |J mJ⟩ themselves, where the formula holds exactly.
+ * Exact: no (the amplitudes carry the solver's ~1e-55 relative error).
+ *
+ * Worked example: at B = 0 every state is a pure |J mJ⟩, so its shift has
+ * slope 0 on every E_J (own: 1 − 1) and on gL, gS, μB/h; in the Paschen–Back
+ * limit the Na 3p state |mL = 0, mS = +1/2⟩ (J = 3/2, mJ = 1/2) has
+ * ∂E/∂gS → (μB/h)·B/2 and ∂E/∂gL → 0 (test).
+ */
+export function fineStructureShiftSlopes(term: FineStructureTerm, state: FineStructureState, tesla: Dec): FineStructureShiftSlopes {
+  let mL = ZERO;
+  let mS = ZERO;
+  for (const u of state.uncoupled) {
+    const w = u.amplitude.pow(2);
+    mL = mL.add(w.mul(u.mL2).div(2));
+    mS = mS.add(w.mul(u.mS2).div(2));
+  }
+  const energies = new Map<number, Dec>(term.partners.map((p) => [p.J2, ZERO]));
+  for (const c of state.coupled) energies.set(c.J2, c.amplitude.pow(2));
+  energies.set(state.J2, energies.get(state.J2)!.sub(1));
+  const field = term.muB_h.mul(tesla);
+  return {
+    energies,
+    gL: field.mul(mL),
+    gS: field.mul(mS),
+    muB_h: tesla.mul(term.gL.mul(mL).add(term.gS.mul(mS))),
+  };
+}
+
+/**
+ * ∂ζ/∂E_J of the fitted spin–orbit constant, one per partner: the fit is
+ * linear and homogeneous in the energies (ζ = Σ(x − x̄)(E − Ē)/Σ(x − x̄)²),
+ * so the slope on E_J is ζ fitted to energies 1 at J and 0 elsewhere.
+ * Exact: the slopes are the fit's own arithmetic on exact inputs. Null for
+ * a single-J term (no ζ).
+ *
+ * Worked example: Na 3p (J = 1/2, 3/2): ζ = (2/3)(E_3/2 − E_1/2), slopes −2/3 and +2/3.
+ */
+export function spinOrbitSlopes(term: FineStructureTerm): Map<number, Dec> | null {
+  if (term.partners.length < 2) return null;
+  return new Map(
+    term.partners.map((p) => [
+      p.J2,
+      fitSpinOrbit({ ...term, partners: term.partners.map((q) => ({ J2: q.J2, energy: q.J2 === p.J2 ? new Dec(1) : ZERO })) }).zeta!,
+    ]),
+  );
+}
