@@ -35,11 +35,13 @@ export function breitRabiApplies(level: Pick<HyperfineZeemanLevel, "J2" | "I2">)
 }
 
 /**
- * Energy (Hz, from the level centre) of the sublevel (F2, mF2) of a J = 1/2
- * or I = 1/2 level at `tesla` ≥ 0. Throws RangeError when neither J nor I is
- * 1/2 or (F2, mF2) does not exist.
+ * The two-state form of a Breit–Rabi level: the spin-1/2 partner's g (gS
+ * here: gJ when J = 1/2, else gI), the other angular momentum K (I or J,
+ * doubled) and its g (gK), and whether F = K + 1/2 (upper). Throws
+ * RangeError when neither J nor I is 1/2 or (F2, mF2) does not exist.
+ * Shared by the energy and its derivatives (sensitivity.ts).
  */
-export function breitRabiEnergy(level: HyperfineZeemanLevel, F2: number, mF2: number, tesla: Dec): Dec {
+export function breitRabiCase(level: HyperfineZeemanLevel, F2: number, mF2: number): { K2: number; gS: Dec; gK: Dec; upper: boolean } {
   if (!breitRabiApplies(level)) throw new RangeError("Breit–Rabi needs J = 1/2 or I = 1/2");
   const jIsHalf = level.J2 === 1;
   const K2 = jIsHalf ? level.I2 : level.J2;
@@ -48,6 +50,16 @@ export function breitRabiEnergy(level: HyperfineZeemanLevel, F2: number, mF2: nu
   const upper = F2 === K2 + 1;
   if (!upper && !(F2 === K2 - 1 && K2 >= 1)) throw new RangeError(`F = ${F2}/2 does not exist`);
   if (Math.abs(mF2) > F2 || (F2 - mF2) % 2 !== 0) throw new RangeError(`mF = ${mF2}/2 does not exist for F = ${F2}/2`);
+  return { K2, gS, gK, upper };
+}
+
+/**
+ * Energy (Hz, from the level centre) of the sublevel (F2, mF2) of a J = 1/2
+ * or I = 1/2 level at `tesla` ≥ 0. Throws RangeError when neither J nor I is
+ * 1/2 or (F2, mF2) does not exist.
+ */
+export function breitRabiEnergy(level: HyperfineZeemanLevel, F2: number, mF2: number, tesla: Dec): Dec {
+  const { K2, gS, gK, upper } = breitRabiCase(level, F2, mF2);
   const { A, muB_h } = level;
   const zeeman = muB_h.mul(tesla);
   if (Math.abs(mF2) === K2 + 1) {

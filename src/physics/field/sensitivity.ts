@@ -46,7 +46,7 @@ import { gF, hyperfineCoefficients, fValues } from "../hyperfine.js";
 import { blockMatrix, blockMatrixFloat, blockOperators, type FieldState, type HyperfineZeemanLevel, type PreparedLevel } from "./hyperfineZeeman.js";
 import { jzSquaredElement } from "./quadraticZeeman.js";
 import { symmetricEigen } from "./symmetricEigen.js";
-import { breitRabiApplies } from "./breitRabi.js";
+import { breitRabiCase } from "./breitRabi.js";
 import { solveTermBlock, type PreparedTerm, type TermFieldState } from "./termHyperfineZeeman.js";
 
 /** ∂(number)/∂p for the parameters of one level. */
@@ -117,14 +117,8 @@ export function stateSensitivity(level: HyperfineZeemanLevel, state: Pick<FieldS
  * Worked example: 87Rb |F=2, mF=2⟩ at 0.1 T: ∂E/∂A = 3/4, ∂E/∂gJ = (μB/h)(0.1 T)/2.
  */
 export function breitRabiSensitivity(level: HyperfineZeemanLevel, F2: number, mF2: number, tesla: Dec): LevelSensitivity {
-  if (!breitRabiApplies(level)) throw new RangeError("Breit–Rabi needs J = 1/2 or I = 1/2");
+  const { K2, gS, gK, upper } = breitRabiCase(level, F2, mF2);
   const jIsHalf = level.J2 === 1;
-  const K2 = jIsHalf ? level.I2 : level.J2;
-  const gS = jIsHalf ? level.gJ : level.gI;
-  const gK = jIsHalf ? level.gI : level.gJ;
-  const upper = F2 === K2 + 1;
-  if (!upper && !(F2 === K2 - 1 && K2 >= 1)) throw new RangeError(`F = ${F2}/2 does not exist`);
-  if (Math.abs(mF2) > F2 || (F2 - mF2) % 2 !== 0) throw new RangeError(`mF = ${mF2}/2 does not exist for F = ${F2}/2`);
   const { A, muB_h } = level;
   const K = decInt(K2).div(2);
   const mF = decInt(mF2).div(2);

@@ -1,3 +1,4 @@
+import { O_2P4_3P } from "./levels.js";
 import { describe, expect, it } from "vitest";
 import { dec } from "../../../src/physics/decimal.js";
 import { toSI } from "../../../src/physics/units.js";
@@ -22,19 +23,8 @@ const na3p: FineStructureTerm = {
   gS,
   muB_h,
 };
-// O I 2p4 3P2, 3P1, 3P0 at 0, 158.265, 226.977 cm⁻¹ (NIST ASD, from memory): 3×3 blocks, no interval rule.
-const oxygen: FineStructureTerm = {
-  S2: 2,
-  L: 1,
-  partners: [
-    { J2: 4, energy: toSI(dec("0"), "cm-1") },
-    { J2: 2, energy: toSI(dec("158.265"), "cm-1") },
-    { J2: 0, energy: toSI(dec("226.977"), "cm-1") },
-  ],
-  gL: dec("1"),
-  gS,
-  muB_h,
-};
+// O I 2p⁴ ³P (NIST ASD, from memory; levels.ts): three partners, 3×3 blocks, no interval rule.
+const oxygen = O_2P4_3P;
 
 describe("fineStructureFloatSolver", () => {
   // The reference is the 60-digit Dec solver, itself checked against the mpmath fixture in fineStructure.test.ts.

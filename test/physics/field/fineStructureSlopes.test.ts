@@ -4,6 +4,7 @@
  * route: re-solving the term with one parameter moved by ±h (central
  * difference at 60 digits).
  */
+import { O_2P4_3P } from "./levels.js";
 import { describe, expect, it } from "vitest";
 import { Dec, dec } from "../../../src/physics/decimal.js";
 import { toSI } from "../../../src/physics/units.js";
@@ -13,20 +14,8 @@ import { fineStructureShiftSlopes, solveFineStructure, spinOrbitSlopes, type Fin
 
 const muB_h = val(CODATA_2022.muB_h);
 const gS = val(CODATA_2022.g_e).neg();
-// O I 2p4 3P2, 3P1, 3P0 at 0, 158.265, 226.977 cm⁻¹ (NIST ASD, from memory): three partners, so the
-// energy slopes are not fixed by the interval rule alone.
-const oxygen: FineStructureTerm = {
-  S2: 2,
-  L: 1,
-  partners: [
-    { J2: 4, energy: toSI(dec("0"), "cm-1") },
-    { J2: 2, energy: toSI(dec("158.265"), "cm-1") },
-    { J2: 0, energy: toSI(dec("226.977"), "cm-1") },
-  ],
-  gL: dec("1"),
-  gS,
-  muB_h,
-};
+// O I 2p⁴ ³P (NIST ASD, from memory; levels.ts): three partners, 3×3 blocks, no interval rule.
+const oxygen = O_2P4_3P;
 // Na 3p 2P1/2 and 2P3/2 (NIST ASD, from memory)
 const na3p: FineStructureTerm = {
   S2: 1,

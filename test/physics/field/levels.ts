@@ -3,6 +3,8 @@ import { dec } from "../../../src/physics/decimal.js";
 import { val } from "../../../src/physics/constants/constant.js";
 import { CODATA_2022 } from "../../../src/physics/constants/codata2022.js";
 import type { HyperfineZeemanLevel } from "../../../src/physics/field/hyperfineZeeman.js";
+import type { FineStructureTerm } from "../../../src/physics/field/fineStructure.js";
+import { toSI } from "../../../src/physics/units.js";
 
 export const muB_h = val(CODATA_2022.muB_h); // CODATA 2022
 
@@ -62,5 +64,22 @@ export const H1_2P32: HyperfineZeemanLevel = {
   gI: dec("-0.003042"),
   A: dec("24.7e6"),
   B: dec("0"),
+  muB_h,
+};
+
+/**
+ * O I 2p⁴ ³P2, ³P1, ³P0 at 0, 158.265, 226.977 cm⁻¹ (NIST ASD, from memory):
+ * an inverted triplet with 3×3 blocks that does not follow the interval rule.
+ */
+export const O_2P4_3P: FineStructureTerm = {
+  S2: 2,
+  L: 1,
+  partners: [
+    { J2: 4, energy: toSI(dec("0"), "cm-1") },
+    { J2: 2, energy: toSI(dec("158.265"), "cm-1") },
+    { J2: 0, energy: toSI(dec("226.977"), "cm-1") },
+  ],
+  gL: dec("1"),
+  gS: val(CODATA_2022.g_e).neg(),
   muB_h,
 };
