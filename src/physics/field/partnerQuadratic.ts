@@ -101,23 +101,40 @@ export function spinZSquaredElement(S2: number, L: number, I2: number, J2: numbe
  * null when a denominator vanishes. See the module comment for formula,
  * reference and exactness; worked example there (88Sr ³P₀).
  */
-export function partnerQuadraticCoefficient(term: PartnerTerm, level: PartnerLevel, partners: readonly PartnerLevel[], F2: number, mF2: number): Dec | null {
-  const { S2, L, I2, muB_h } = term;
+/** One term e²/Δ of the sum: the partner (its index in `partners`), its F′, the exact e² and the gap Δ (Hz). */
+interface PartnerSumTerm {
+  index: number;
+  Fp2: number;
+  e2: Rational;
+  gap: Dec;
+}
+
+/**
+ * The non-zero terms of the second-order sum of (F, mF) of `level`, or null
+ * when a gap vanishes: the one loop the coefficient and its slopes share.
+ */
+function partnerSumTerms(term: PartnerTerm, level: PartnerLevel, partners: readonly PartnerLevel[], F2: number, mF2: number): PartnerSumTerm[] | null {
+  const { S2, L, I2 } = term;
   if (!fValues(I2, level.J2).includes(F2) || Math.abs(mF2) > F2 || (F2 - mF2) % 2 !== 0) throw new RangeError(`no sublevel F=${F2}/2, mF=${mF2}/2`);
   const own = level.energy.plus(hyperfineShift(level.A, level.B, I2, level.J2, F2));
-  let sum = ZERO;
-  for (const p of partners) {
-    if (p.J2 === level.J2 || Math.abs(p.J2 - level.J2) > 2) continue;
+  const out: PartnerSumTerm[] = [];
+  partners.forEach((p, index) => {
+    if (p.J2 === level.J2 || Math.abs(p.J2 - level.J2) > 2) return;
     for (const Fp2 of fValues(I2, p.J2)) {
       if (Math.abs(Fp2 - F2) > 2 || Math.abs(mF2) > Fp2) continue;
       const e2 = spinZSquaredElement(S2, L, I2, level.J2, F2, p.J2, Fp2, mF2);
       if (e2.isZero()) continue;
-      const gap = own.minus(p.energy.plus(hyperfineShift(p.A, p.B, I2, p.J2, Fp2)));
-      if (gap.isZero()) return null;
-      sum = sum.plus(ratDec(e2).div(gap));
+      out.push({ index, Fp2, e2, gap: own.minus(p.energy.plus(hyperfineShift(p.A, p.B, I2, p.J2, Fp2))) });
     }
-  }
-  const dg = term.gS.minus(term.gL).mul(muB_h);
+  });
+  return out.some((t) => t.gap.isZero()) ? null : out;
+}
+
+export function partnerQuadraticCoefficient(term: PartnerTerm, level: PartnerLevel, partners: readonly PartnerLevel[], F2: number, mF2: number): Dec | null {
+  const terms = partnerSumTerms(term, level, partners, F2, mF2);
+  if (terms === null) return null;
+  const sum = terms.reduce((acc, t) => acc.plus(ratDec(t.e2).div(t.gap)), ZERO);
+  const dg = term.gS.minus(term.gL).mul(term.muB_h);
   return sum.mul(dg).mul(dg);
 }
 
@@ -152,35 +169,27 @@ export interface PartnerSlope {
 export function partnerQuadraticSlopes(
   term: PartnerTerm, level: PartnerLevel, partners: readonly PartnerLevel[], F2: number, mF2: number,
 ): { level: PartnerSlope; partners: PartnerSlope[] } | null {
-  const { S2, L, I2, muB_h } = term;
-  if (!fValues(I2, level.J2).includes(F2) || Math.abs(mF2) > F2 || (F2 - mF2) % 2 !== 0) throw new RangeError(`no sublevel F=${F2}/2, mF=${mF2}/2`);
-  const dg = term.gS.minus(term.gL).mul(muB_h);
+  const terms = partnerSumTerms(term, level, partners, F2, mF2);
+  if (terms === null) return null;
+  const { I2 } = term;
+  const dg = term.gS.minus(term.gL).mul(term.muB_h);
   const K = dg.mul(dg);
   const ONE = new Dec(1);
   const aOf = (J2: number, F: number) => hyperfineShift(ONE, ZERO, I2, J2, F);
   const bOf = (J2: number, F: number) => hyperfineShift(ZERO, ONE, I2, J2, F);
-  const own = level.energy.plus(hyperfineShift(level.A, level.B, I2, level.J2, F2));
   const self: PartnerSlope = { energy: ZERO, A: ZERO, B: ZERO };
-  const others: PartnerSlope[] = [];
-  for (const p of partners) {
-    const slope: PartnerSlope = { energy: ZERO, A: ZERO, B: ZERO };
-    others.push(slope);
-    if (p.J2 === level.J2 || Math.abs(p.J2 - level.J2) > 2) continue;
-    for (const Fp2 of fValues(I2, p.J2)) {
-      if (Math.abs(Fp2 - F2) > 2 || Math.abs(mF2) > Fp2) continue;
-      const e2 = spinZSquaredElement(S2, L, I2, level.J2, F2, p.J2, Fp2, mF2);
-      if (e2.isZero()) continue;
-      const gap = own.minus(p.energy.plus(hyperfineShift(p.A, p.B, I2, p.J2, Fp2)));
-      if (gap.isZero()) return null;
-      // ∂t/∂Δ = −K·e²/Δ²
-      const d = K.mul(ratDec(e2)).div(gap.mul(gap)).neg();
-      self.energy = self.energy.plus(d);
-      self.A = self.A.plus(d.mul(aOf(level.J2, F2)));
-      self.B = self.B.plus(d.mul(bOf(level.J2, F2)));
-      slope.energy = slope.energy.minus(d);
-      slope.A = slope.A.minus(d.mul(aOf(p.J2, Fp2)));
-      slope.B = slope.B.minus(d.mul(bOf(p.J2, Fp2)));
-    }
+  const others: PartnerSlope[] = partners.map(() => ({ energy: ZERO, A: ZERO, B: ZERO }));
+  for (const { index, Fp2, e2, gap } of terms) {
+    const p = partners[index]!;
+    const slope = others[index]!;
+    // ∂t/∂Δ = −K·e²/Δ²
+    const d = K.mul(ratDec(e2)).div(gap.mul(gap)).neg();
+    self.energy = self.energy.plus(d);
+    self.A = self.A.plus(d.mul(aOf(level.J2, F2)));
+    self.B = self.B.plus(d.mul(bOf(level.J2, F2)));
+    slope.energy = slope.energy.minus(d);
+    slope.A = slope.A.minus(d.mul(aOf(p.J2, Fp2)));
+    slope.B = slope.B.minus(d.mul(bOf(p.J2, Fp2)));
   }
   return { level: self, partners: others };
 }
