@@ -56,6 +56,17 @@ describe("demo data", () => {
     expect(Math.abs(Number(level("ar40", "3p5-4s-K3/2-J2").gJ!.text) - 1.5)).toBeLessThan(0.01);
   });
 
+  it("has 208Pb 6p² in jj coupling, with (1/2,3/2)1 near the jj value 3/2 and (1/2,3/2)2 between jj and LS", () => {
+    // textbook: jj g of (1/2,3/2)1 in p² is 3/2, of (1/2,3/2)2 is 7/6 (g(p1/2) = 2/3, g(p3/2) = 4/3 with gS = 2);
+    // from memory: NIST ASD, Pb I, Landé g 1.501 (6p² ³P1) and 1.269 (6p² ³P2), the latter between 7/6 and the LS 3/2.
+    const one = level("pb208", "6p2-j1/2-j3/2-J1");
+    const two = level("pb208", "6p2-j1/2-j3/2-J2");
+    expect(one.term.scheme === "jj" && [one.term.J2]).toEqual([2]);
+    expect(Math.abs(one.gJ!.value.toNumber() - 1.5)).toBeLessThan(0.01);
+    expect(two.gJ!.value.toNumber()).toBeGreaterThan(7 / 6);
+    expect(two.gJ!.value.toNumber()).toBeLessThan(1.5);
+  });
+
   it("names a source on every level and every line", () => {
     for (const s of demo.species) {
       for (const l of s.levels) expect(l.source.length, `${s.id} ${l.id}`).toBeGreaterThan(10);
