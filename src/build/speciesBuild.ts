@@ -185,11 +185,18 @@ export function buildSpecies(input: SpeciesInput, ctx: SpeciesBuildContext): Spe
 
   // The plot-axis controls of the one-page layout were numbered by the level's position (axis-label-3);
   // they are named by level id now, and old links to the numbered forms are forwarded by position.
-  const axisAliases: AnchorAlias[] = [];
+  const overviewAliases: AnchorAlias[] = [];
   result.levels.forEach((l, i) => {
     if (!fields.levels.get(l.input.id)?.plot) return;
-    for (const part of ["label", "lin", "log"]) axisAliases.push({ id: `axis-${part}-${i + 1}`, path: levelPagePath(id, l.input.id), target: `axis-${part}:${l.input.id}` });
+    for (const part of ["label", "lin", "log"]) overviewAliases.push({ id: `axis-${part}-${i + 1}`, path: levelPagePath(id, l.input.id), target: `axis-${part}:${l.input.id}` });
   });
+  // A compacted overview leaves a level's short energies table (table-field:<id>) to the level page,
+  // whose full table is named table-field-full:<id>: old links to the short one are forwarded there.
+  for (const l of result.levels) {
+    const page = ids.find((p) => p.path === levelPagePath(id, l.input.id));
+    const target = `table-field-full:${l.input.id}`;
+    if (page?.ids.includes(target)) overviewAliases.push({ id: `table-field:${l.input.id}`, path: page.path, target });
+  }
   // Forwarding maps, from the ids of the written pages.
   // Where each row is, for the search index: the overview first, so a row it shares with a detail page is found there.
   const rowPages = new Map<string, string>();
@@ -198,7 +205,7 @@ export function buildSpecies(input: SpeciesInput, ctx: SpeciesBuildContext): Spe
   }
   for (const page of ids) {
     if (!hasPagesBelow(page.path, paths)) continue;
-    const map = movedMap(page, ids, page.path === overview.path ? axisAliases : []);
+    const map = movedMap(page, ids, page.path === overview.path ? overviewAliases : []);
     if (map) ctx.write(`${page.path}${MOVED_FILE}`, movedScript(map));
   }
 
