@@ -33,10 +33,15 @@ export function lineCouplingNote(ln: LineResult): string | null {
   return `Intermediate coupling: ${parts.join(", and ")}. The shifts and g_eff use the measured value; the pattern notation, from the exact ${schemes} factors, describes the ${schemes} limit, not the atom.`;
 }
 
-/** The short tag a bench sheet puts after a line's pattern, e.g. "LS limit: 6s6p-3P1 gJ measured 1.0 % off", or null. */
+/**
+ * The short tag a bench sheet puts after a line's pattern, e.g. "LS limit
+ * (upper g 1.0 % off)", or null: short, because a sheet's pattern column
+ * does not wrap; the level pages say which level and why.
+ */
 export function patternLimitTag(ln: LineResult): string | null {
   const marked = [ln.upper, ln.lower].filter((l) => l.gJDiffers);
   if (marked.length === 0) return null;
   const schemes = [...new Set(marked.map(schemeName))].join(" and ");
-  return `${schemes} limit: ${marked.map((l) => `${l.input.id} gJ measured ${couplingDifferencePercent(l)} % off`).join(", ")}`;
+  const which = (l: LevelResult) => `${l === ln.upper ? "upper" : "lower"} g ${couplingDifferencePercent(l)} % off`;
+  return `${schemes} limit (${marked.map(which).join(", ")})`;
 }

@@ -149,7 +149,7 @@ describe("intermediate coupling of LS levels", () => {
     // (textbook formula), so the difference is 1.01 %.
     expect(level("3P1").gJDiffers).toBe(true);
     expect(levelCouplingNote(level("3P1"))).toBe("measured, 1.0 % from LS (intermediate coupling; the LS pattern describes the LS limit, not the atom)");
-    expect(patternLimitTag(line("254"))).toBe("LS limit: 3P1 gJ measured 1.0 % off");
+    expect(patternLimitTag(line("254"))).toBe("LS limit (upper g 1.0 % off)");
   });
 
   it("leaves a measured gJ within 1 % of LS unmarked, and its lines without a note", () => {
