@@ -363,9 +363,13 @@ export function termInsensitivePointSensitivity(
   if (!tesla.gt(0)) throw new RangeError("the point must be at B > 0");
   const n = prepared.problem.levels.length;
   const h = tesla.mul(INSENSITIVE_STEP);
+  // a block is solved once per field: the two sublevels of a ΔmF = 0 transition share it
+  const solved = new Map<string, ReturnType<typeof solveTermBlock>>();
   const pick = (s: { F2: number; mF2: number }, b: Dec): TermFieldState => {
     const block = prepared.blocks.find((x) => x.M2 === s.mF2);
-    const st = block ? solveTermBlock(prepared, block, b).find((x) => x.level === level && x.state.F2 === s.F2) : undefined;
+    const key = `${s.mF2}@${b.toString()}`;
+    if (block && !solved.has(key)) solved.set(key, solveTermBlock(prepared, block, b));
+    const st = block ? solved.get(key)!.find((x) => x.level === level && x.state.F2 === s.F2) : undefined;
     if (!st) throw new RangeError(`no sublevel F=${s.F2}/2, mF=${s.mF2}/2`);
     return st.state;
   };
