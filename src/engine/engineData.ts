@@ -14,7 +14,24 @@ import type { SpeciesResult } from "../results/types.js";
 import { lsTerm } from "../data/model.js";
 import { sublevelTransitionPairs } from "../physics/field/sublevelTransitions.js";
 import { termText } from "../site/format.js";
-import { ENGINE_FORMAT, type EngineData } from "./types.js";
+import { speciesInputs } from "../results/inputUncertainties.js";
+import { levelGJ } from "../results/fieldUncertainty.js";
+import type { Uncertain } from "../physics/uncertain.js";
+import { ENGINE_FORMAT, type EngineData, type Parts } from "./types.js";
+
+/** The non-zero signed contributions of an uncertain input, or undefined (kept out of the file) when it has none. */
+function parts(x: Uncertain | null | undefined): Parts | undefined {
+  if (!x) return undefined;
+  const out: Parts = {};
+  for (const [k, c] of x.parts) if (!c.isZero()) out[k] = c.toString();
+  return Object.keys(out).length ? out : undefined;
+}
+
+/** An object without its undefined entries, or undefined when none is left (keeps the engine data small). */
+function some<T extends object>(o: T): T | undefined {
+  const kept = Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as T;
+  return Object.keys(kept).length ? kept : undefined;
+}
 
 const str = (x: Dec): string => x.toString();
 const strOrNull = (x: Dec | null | undefined): string | null => (x === null || x === undefined ? null : x.toString());
@@ -32,12 +49,14 @@ export function engineData(
   configured: readonly ConfiguredField[],
 ): EngineData {
   const byId = new Map(s.levels.map((l) => [l.input.id, l]));
+  const inputs = speciesInputs(s.input, constants);
   return {
     format: ENGINE_FORMAT,
     id: s.input.id,
     label: s.input.label,
     constants: constants.edition,
     muB_h: str(val(constants.muB_h)),
+    ...(parts(inputs.muB_h) ? { muB_h_u: parts(inputs.muB_h) } : {}),
     fields: configured.map((f) => ({ text: f.text, tesla: str(f.tesla) })),
     levels: s.levels.map((l) => {
       const lv = solverLevel(s, l, constants);
@@ -59,6 +78,16 @@ export function engineData(
         L: lsTerm(l.input.term)?.L ?? null,
         // the list computeFields' sublevelTransitions makes (levels with hyperfine structure only)
         transitions: lv.I2 > 0 ? sublevelTransitionPairs(lv).pairs.map(({ lo, up, kind }) => ({ lo, up, kind })) : [],
+        ...withU(
+          some({
+            // the same inputs as solverLevel: gJ in use (J = 0: exact 0), gI, A and B only with hyperfine structure
+            gJ: l.J2 > 0 ? parts(levelGJ(l, inputs)) : undefined,
+            gI: lv.I2 > 0 ? parts(inputs.gI) : undefined,
+            A: lv.I2 > 0 ? parts(inputs.level(l.input.id).A) : undefined,
+            B: lv.I2 > 0 ? parts(inputs.level(l.input.id).B) : undefined,
+            energy: parts(inputs.level(l.input.id).energy),
+          }),
+        ),
       };
     }),
     terms: fields.terms.map((t) => ({
@@ -73,6 +102,7 @@ export function engineData(
       gS: str(s.gS),
       limitT: strOrNull(t.limit?.tesla),
       paschenBackT: strOrNull(t.paschenBackTesla),
+      ...withU(some({ gL: parts(inputs.gL), gS: parts(inputs.gS) })),
     })),
     lines: s.lines.map((ln) => ({
       id: ln.input.id,
@@ -82,6 +112,8 @@ export function engineData(
       k: ln.k,
       hyperfineBoth: hyperfineConstants(s, ln.upper) !== null && hyperfineConstants(s, ln.lower) !== null,
       frequencyHz: strOrNull(ln.frequencyHz),
+      // ν = c/λ depends on the line's wavelength only: its one contribution is u(ν)
+      ...withU(some({ frequencyHz: ln.frequencyHzU && !ln.frequencyHzU.isZero() ? { [`line:${ln.input.id}:wavelength`]: ln.frequencyHzU.toString() } : undefined })),
       linear: ln.components.map((x) => ({
         mu2: x.mu2,
         ml2: x.ml2,
@@ -93,6 +125,8 @@ export function engineData(
     })),
   };
 }
+
+const withU = <T extends object>(u: T | undefined): { u?: T } => (u ? { u } : {});
 
 /**
  * A classic script that registers the data on the page:

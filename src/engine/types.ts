@@ -39,7 +39,12 @@ export interface EngineLevel {
    * the solver's (F, mF) order, and the kind. Empty without hyperfine structure.
    */
   transitions: { lo: number; up: number; kind: "magnetic-dipole" | "two-photon" }[];
+  /** Signed first-order contributions (∂x/∂input)·u(input), by input key (results/inputUncertainties.ts), of the solver inputs gJ, gI, A, B and the level energy; only non-zero ones. Absent in data of older builds. */
+  u?: { gJ?: Parts; gI?: Parts; A?: Parts; B?: Parts; energy?: Parts };
 }
+
+/** Signed contributions (∂x/∂input)·u(input) of one engine input, by input key, as decimal strings; only non-zero ones. */
+export type Parts = Record<string, string>;
 
 /**
  * A term whose fine-structure partners are all listed: with each partner
@@ -58,6 +63,8 @@ export interface EngineTerm {
   limitT: string | null;
   /** Fine-structure Paschen–Back scale (T), or null. */
   paschenBackT: string | null;
+  /** Contributions to gL (through the mass) and gS (through g_e), as EngineLevel.u. */
+  u?: { gL?: Parts; gS?: Parts };
 }
 
 /** One component of the J-resolved linear pattern (the model used when no level of the line mixes). */
@@ -83,6 +90,8 @@ export interface EngineLine {
   hyperfineBoth: boolean;
   /** Line frequency c/λ (the zero-field, hyperfine-free line centre), Hz, as a decimal string; null without a wavelength. Absent in data of older builds (read as null). */
   frequencyHz?: string | null;
+  /** Contributions to frequencyHz (through the line's wavelength), as EngineLevel.u. */
+  u?: { frequencyHz?: Parts };
   linear: EngineLinearComponent[];
 }
 
@@ -94,6 +103,8 @@ export interface EngineData {
   /** Constants edition name and the μB/h (Hz/T) taken from it. */
   constants: string;
   muB_h: string;
+  /** Contributions to muB_h (its CODATA uncertainty), as EngineLevel.u. */
+  muB_h_u?: Parts;
   /** The build's configured bias fields, as written and in tesla. */
   fields: { text: string; tesla: string }[];
   levels: EngineLevel[];
@@ -107,6 +118,8 @@ export interface AtState<N> {
   E_Hz: N;
   /** Standard uncertainty of E_Hz (exact path only, `npm run at`; null when exact). */
   E_Hz_u?: N | null;
+  /** Float64 calculator only (engineUncertainty.ts): true when E_Hz_u is a float-resolution bound, not a resolved value. */
+  E_Hz_u_float?: boolean;
   high_field: { mJ: string; mI: string };
 }
 
@@ -118,6 +131,8 @@ export interface AtTransition<N> {
   Hz: N;
   /** Standard uncertainty of Hz (exact path only; null when exact). */
   Hz_u?: N | null;
+  /** As AtState.E_Hz_u_float. */
+  Hz_u_float?: boolean;
 }
 
 export interface AtComponent<N> {
@@ -130,6 +145,9 @@ export interface AtComponent<N> {
   /** Standard uncertainties of shift_Hz and frequency_Hz (exact path only; null when exact). */
   shift_Hz_u?: N | null;
   frequency_Hz_u?: N | null;
+  /** As AtState.E_Hz_u_float. */
+  shift_Hz_u_float?: boolean;
+  frequency_Hz_u_float?: boolean;
   /** Absolute frequency of the component, the line frequency c/λ + shift_Hz; null when the line has no wavelength. */
   frequency_Hz: N | null;
 }
