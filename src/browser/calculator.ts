@@ -18,9 +18,11 @@
  * build's. No inline script or style is used (the pages' CSP forbids both).
  */
 import { engineAt, prepareEngine } from "../engine/engine.js";
+import { engineAtWithUncertainty, prepareEngineUncertainty } from "../engine/engineUncertainty.js";
 import { parseFieldText } from "../engine/fieldText.js";
 import { ENGINE_FORMAT, type AtResult, type EngineData } from "../engine/types.js";
 import { formatFloat } from "./formatFloat.js";
+import { groupDigits, MINUS } from "../site/plainFormat.js";
 import { polarizationSymbol } from "../site/format.js";
 
 declare global {
@@ -81,6 +83,29 @@ const THZ = 1e12;
 const kHzDigits = (hz: number): number => Math.max(1, Math.floor(Math.log10(Math.abs(hz) / THZ)) + 1) + 9;
 
 const show = (x: number, sig: number): string => formatFloat(x, sig);
+
+/** float64 carries about 16 significant digits: a concise value is not written with more. */
+const MAX_DIGITS = 16;
+
+/**
+ * A value with its standard uncertainty in the concise form the tables use,
+ * "4 271.676 631 815 18(56)": the value to the place of the uncertainty's
+ * second significant digit (at most MAX_DIGITS significant digits; then the
+ * uncertainty in units of the last digit written, at least 1), the
+ * uncertainty in those units. Null when u is null (exact: the plain number).
+ */
+export function conciseFloat(x: number, u: number | null | undefined): { text: string; unc: string } | null {
+  if (u === null || u === undefined || !(u > 0) || !Number.isFinite(x)) return null;
+  let d = 1 - Math.floor(Math.log10(u));
+  if (x !== 0) d = Math.min(d, MAX_DIGITS - 1 - Math.floor(Math.log10(Math.abs(x))));
+  d = Math.max(0, Math.min(d, 100));
+  if (Math.abs(x) >= 1e21) return null;
+  const fixed = Math.abs(x).toFixed(d);
+  const [int, frac = ""] = fixed.split(".") as [string, string?];
+  const units = Math.max(1, Math.round(u * 10 ** d));
+  const sign = x < 0 && /[1-9]/.test(fixed) ? MINUS : "";
+  return { text: sign + groupDigits(int, false) + (frac ? "." + groupDigits(frac, true) : ""), unc: `(${units})` };
+}
 const signed = (q: string) => q.replace(/^-/, "\u2212");
 
 function el<K extends keyof HTMLElementTagNameMap>(tag: K, text?: string, cls?: string): HTMLElementTagNameMap[K] {
@@ -98,7 +123,25 @@ interface Column {
 }
 
 /** A table like the build's (class atlas-table): caption, header, rows of text or number cells. */
-function table(caption: string, columns: Column[], rows: (string | { text: string; value: number })[][], cls: string): HTMLTableElement {
+/** A number cell: its text (value shown with `sig` digits when exact), the value in the column's base unit, and its standard uncertainty. */
+interface NumberCell {
+  text: string;
+  value: number;
+  /** The concise form (value and "(12)"), when the number has an uncertainty. */
+  unc?: { text: string; unc: string } | null;
+  /** The uncertainty is only a float64 resolution bound (engineUncertainty.ts). */
+  bound?: boolean;
+  /** Standard uncertainty in the column's base unit. */
+  u?: number | null;
+}
+
+/** A number cell in the display unit (`scale` Hz per unit): concise form when u is given. */
+function numberCell(value: number, u: number | null | undefined, scale: number, sig: number, bound?: boolean): NumberCell {
+  const unc = conciseFloat(value / scale, u === null || u === undefined ? null : u / scale);
+  return { text: show(value / scale, sig), value, unc, bound: bound === true, u: u ?? null };
+}
+
+function table(caption: string, columns: Column[], rows: (string | NumberCell)[][], cls: string): HTMLTableElement {
   const t = el("table", undefined, `atlas-table calc-table ${cls}`);
   t.appendChild(el("caption", caption));
   const head = t.createTHead().insertRow();
@@ -118,7 +161,14 @@ function table(caption: string, columns: Column[], rows: (string | { text: strin
       td.className = `k-${columns[i]!.kind}`;
       if (typeof cell === "string") td.textContent = cell;
       else {
-        td.textContent = cell.text;
+        if (cell.unc) {
+          td.textContent = cell.unc.text;
+          // "(12)": hidden with the page's other uncertainties by the "Show uncertainties" switch (class hide-unc on the root)
+          const unc = el("span", cell.unc.unc, "unc");
+          if (cell.bound) unc.title = "at most: below the resolution of double precision";
+          td.appendChild(unc);
+          if (cell.u !== undefined && cell.u !== null) td.dataset.u = String(cell.u);
+        } else td.textContent = cell.text;
         // full float64 value in the column's base unit (Hz, or a plain number)
         td.dataset.value = String(cell.value);
       }
@@ -164,7 +214,7 @@ function render(w: Widget, data: EngineData, answer: AtResult<number>, fieldText
             s.F,
             signed(s.mF),
             ...(hf ? [signed(s.high_field.mJ), signed(s.high_field.mI)] : []),
-            { text: show(s.E_Hz / MHZ, 12), value: s.E_Hz },
+            numberCell(s.E_Hz, s.E_Hz_u, MHZ, 12, s.E_Hz_u_float),
           ]),
           "calc-energies",
         ),
@@ -193,7 +243,7 @@ function render(w: Widget, data: EngineData, answer: AtResult<number>, fieldText
             `${t.lower.F}, ${signed(t.lower.mF)}`,
             `${t.upper.F}, ${signed(t.upper.mF)}`,
             t.kind === "two-photon" ? "2-photon" : "M1",
-            { text: show(t.Hz / MHZ, 12), value: t.Hz },
+            numberCell(t.Hz, t.Hz_u, MHZ, 12, t.Hz_u_float),
           ]),
           "calc-transitions",
         ),
@@ -225,8 +275,8 @@ function render(w: Widget, data: EngineData, answer: AtResult<number>, fieldText
             signed(c.lower.replace(/=-/g, "=\u2212")),
             polarizationSymbol(c.polarization, c.delta_m),
             { text: show(c.relative_strength, 6), value: c.relative_strength },
-            { text: show(c.shift_Hz / MHZ, 10), value: c.shift_Hz },
-            ...(absolute && c.frequency_Hz !== null ? [{ text: show(c.frequency_Hz / THZ, kHzDigits(c.frequency_Hz)), value: c.frequency_Hz }] : []),
+            numberCell(c.shift_Hz, c.shift_Hz_u, MHZ, 10, c.shift_Hz_u_float),
+            ...(absolute && c.frequency_Hz !== null ? [numberCell(c.frequency_Hz, c.frequency_Hz_u, THZ, kHzDigits(c.frequency_Hz), c.frequency_Hz_u_float)] : []),
           ]),
           "calc-components",
         ),
@@ -246,7 +296,7 @@ function compute(w: Widget, fieldText: string): void {
     const p = parseFieldText(fieldText);
     if (!p.ok) throw new RangeError(p.message);
     const tesla = p.tesla.toNumber();
-    const answer = engineAt(data, tesla);
+    const answer = engineAtWithUncertainty(data, tesla);
     const n = render(w, data, answer, p.text);
     w.input.removeAttribute("aria-invalid");
     w.root.dataset.tesla = String(tesla);
@@ -326,6 +376,7 @@ function setUp(root: HTMLElement): void {
     idle(() => {
       try {
         prepareEngine(dataFor(w.species));
+        prepareEngineUncertainty(dataFor(w.species));
       } catch {
         // reported when the reader computes
       }

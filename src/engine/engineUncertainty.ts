@@ -45,7 +45,7 @@
  * compare with the export's _u keys (Hellmann–Feynman, an independent route).
  */
 import { Dec } from "../physics/decimal.js";
-import { engineAt } from "./engine.js";
+import { engineAt, prepareEngine } from "./engine.js";
 import type { AtResult, EngineData, Parts } from "./types.js";
 
 /** Relative step of the moved inputs when their u is smaller (see the module comment); level energies (absolute, up to 1e15 Hz, beside fine-structure intervals a thousand times smaller) move by ENERGY_STEP. */
@@ -149,6 +149,14 @@ function inputs(data: EngineData): Input[] {
   }
   cache.set(data, list);
   return list;
+}
+
+/** Prepare the moved copies of a species ahead of its first answer with uncertainties (e.g. when the page is idle). */
+export function prepareEngineUncertainty(data: EngineData): void {
+  for (const x of inputs(data)) {
+    prepareEngine(x.plus);
+    prepareEngine(x.minus);
+  }
 }
 
 /** Accumulates Σc² and the float noise bound of one answer. */

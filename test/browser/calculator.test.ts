@@ -43,8 +43,10 @@ function shownEnergies(page: Page): Promise<{ caption: string; values: number[];
   );
 }
 
-/** "−4 268.380 266 696 62" → −4268.38026669662 (the page's thin spaces and minus sign). */
-const shownNumber = (text: string) => Number(text.replace(/\u2212/g, "-").replace(/[\u2009\u2007\u2008\s]/g, ""));
+/** "−4 268.380 266 696 62(56)" → −4268.38026669662 (the page's thin spaces and minus sign; the concise uncertainty left out). */
+const shownNumber = (text: string) => Number(text.replace(/\(\d+\)$/, "").replace(/\u2212/g, "-").replace(/[\u2009\u2007\u2008\s]/g, ""));
+/** One unit of the last digit a shown number (in MHz) writes, in Hz: a concise value is rounded there. */
+const lastDigitHz = (text: string) => 1e6 * 10 ** -(/\.([\d\u2009]*)/.exec(text.replace(/\(\d+\)$/, ""))?.[1]!.replace(/\u2009/g, "").length ?? 0);
 
 describe.skipIf(!hasChromium)("field calculator in the browser", () => {
   let site: string;
@@ -80,7 +82,8 @@ describe.skipIf(!hasChromium)("field calculator in the browser", () => {
         expect(close(value, s.E_Hz, 1), what).toBe(true);
         expect(close(value, Number(exact.levels[i]!.states[k]!.E_Hz), 1), `${what} vs npm run at`).toBe(true);
         // and its shown text (MHz, 12 significant digits) is the same number
-        expect(Math.abs(shownNumber(shown[i]!.texts[k]!) * 1e6 - value), `${what} shown`).toBeLessThan(Math.max(1e-9 * Math.abs(value), 1));
+        // (to half its last digit when the concise form rounds it to its uncertainty's place)
+        expect(Math.abs(shownNumber(shown[i]!.texts[k]!) * 1e6 - value), `${what} shown`).toBeLessThan(Math.max(1e-9 * Math.abs(value), 1, 0.5 * lastDigitHz(shown[i]!.texts[k]!) * 1.000001));
       });
     });
     expectAgrees(inPage, exact, "rb87 at 4.7 G in the page");
@@ -88,6 +91,42 @@ describe.skipIf(!hasChromium)("field calculator in the browser", () => {
     const counts = await page.evaluate(() => ["calc-energies", "calc-transitions", "calc-components"].map((c) => document.querySelectorAll(`.calc-results table.${c}`).length));
     expect(counts).toEqual([3, 3, 2]);
     expect(problems).toEqual([]);
+  });
+
+  it("shows each number's standard uncertainty as a concise (12), which the Show uncertainties switch hides", async () => {
+    const page = await ctx.newPage();
+    await page.goto(server.url + "species/rb87/#B=4.7G");
+    await statusOf(page);
+    // "(56)" is u in units of the value's last digit (MHz column; u in Hz in data-u)
+    const cells = await page.evaluate(() =>
+      Array.from(document.querySelectorAll<HTMLTableCellElement>(".calc-results table.calc-energies tbody td.k-number")).map((td) => ({
+        text: td.textContent ?? "",
+        unc: td.querySelector(".unc")?.textContent ?? null,
+        u: Number(td.dataset.u),
+      })),
+    );
+    expect(cells.length).toBeGreaterThan(0);
+    for (const c of cells) {
+      expect(c.unc, c.text).toMatch(/^\(\d{1,2}\)$/);
+      expect(c.text.endsWith(c.unc!)).toBe(true);
+      const units = Number(c.unc!.slice(1, -1));
+      expect(Math.abs(units * lastDigitHz(c.text) - c.u), c.text).toBeLessThanOrEqual(0.5 * lastDigitHz(c.text) * 1.000001);
+    }
+    // every kind of table carries them: transitions and line components too
+    for (const cls of ["calc-transitions", "calc-components"]) expect(await page.locator(`.calc-results table.${cls} td.k-number .unc`).count(), cls).toBeGreaterThan(0);
+    const first = page.locator(".calc-results table.calc-energies td.k-number .unc").first();
+    await page.check("#unc-choice");
+    expect(await first.isVisible()).toBe(true);
+    await page.uncheck("#unc-choice");
+    expect(await first.isVisible()).toBe(false);
+    // a new answer (another field) is written hidden too
+    await page.fill("#calc-field", "12");
+    const before = await page.textContent(".calc-status");
+    await page.click(".calc-form button[type=submit]");
+    await statusOf(page, before ?? "");
+    expect(await page.locator(".calc-results td.k-number .unc").first().isVisible()).toBe(false);
+    await page.check("#unc-choice");
+    expect(await page.locator(".calc-results td.k-number .unc").first().isVisible()).toBe(true);
   });
 
   it("gives the JSON export's entries at a configured field", async () => {
