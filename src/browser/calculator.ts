@@ -7,6 +7,7 @@
  *
  *   SublevelAtlas.at("rb87", "4.7 G")   every number of rb87 at 4.7 G
  *   SublevelAtlas.at("rb87", 0.00047)   the same, field in tesla
+ *   SublevelAtlas.atWithUncertainty("rb87", "4.7 G")   with standard uncertainties (…_u keys)
  *   SublevelAtlas.species()             ids whose engine data is on the page
  *
  * Engine data arrive in classic scripts species/<id>/engine-data.js that run
@@ -35,6 +36,8 @@ declare global {
 export interface SublevelAtlasApi {
   /** Every number of a species at a field: text with a unit ("4.7 G", "0.47 mT") or a number of tesla. */
   at(speciesId: string, field: string | number): AtResult<number>;
+  /** The same with the standard uncertainties the form shows (E_Hz_u, Hz_u, shift_Hz_u, frequency_Hz_u; src/engine/engineUncertainty.ts). */
+  atWithUncertainty(speciesId: string, field: string | number): AtResult<number>;
   /** Ids of the species whose engine data are loaded on this page. */
   species(): string[];
   /** A field text read into tesla (the parser `npm run at` uses). */
@@ -69,6 +72,7 @@ function teslaOf(field: string | number): number {
 
 const api: SublevelAtlasApi = Object.freeze({
   at: (speciesId: string, field: string | number) => engineAt(dataFor(speciesId), teslaOf(field)),
+  atWithUncertainty: (speciesId: string, field: string | number) => engineAtWithUncertainty(dataFor(speciesId), teslaOf(field)),
   species: () => Object.keys(loaded()).sort(),
   tesla: (field: string) => teslaOf(field),
 });
