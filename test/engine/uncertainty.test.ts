@@ -46,6 +46,24 @@ describe("field calculator uncertainties", () => {
     const clock = calc.transitions.find((t) => t.lower.F === "1" && t.lower.mF === "0" && t.upper.F === "2" && t.upper.mF === "0")!;
     expect(clock.Hz_u!).toBeCloseTo(2 * 45e-6, 8);
   });
+  it("87Rb at 3.228 G: the clock transition, the two-photon transition and the D2 components carry the export's u to 2 %", () => {
+    const { exact, calc } = at("3.228 G");
+    const find = <T extends { level: string; lower: { F: string; mF: string }; upper: { F: string; mF: string } }>(list: T[], lo: string, up: string) =>
+      list.find((t) => t.level === "5s-S1/2" && `${t.lower.F},${t.lower.mF}` === lo && `${t.upper.F},${t.upper.mF}` === up)!;
+    // clock |1, 0⟩ → |2, 0⟩ and two-photon |1, −1⟩ → |2, 1⟩ (common practice: the pair magic near 3.23 G)
+    for (const [lo, up] of [["1,0", "2,0"], ["1,-1", "2,1"]] as const) {
+      const c = find(calc.transitions, lo, up);
+      expect(c, `${lo} → ${up}`).toBeDefined();
+      expectU(c.Hz_u, find(exact.transitions, lo, up).Hz_u, `${lo} → ${up}`, c.Hz_u_float);
+    }
+    const d2 = calc.lines.find((l) => l.id === "D2")!;
+    const ex = exact.lines.find((l) => l.id === "D2")!.components;
+    expect(d2.components.length).toBe(ex.length);
+    for (const c of d2.components) {
+      const e = ex.find((x) => x.upper === c.upper && x.lower === c.lower && x.delta_m === c.delta_m)!;
+      expectU(c.shift_Hz_u, e.shift_Hz_u, `D2 ${c.upper}→${c.lower} shift`, c.shift_Hz_u_float);
+    }
+  });
   for (const sp of species) for (const field of configured.map((f) => f.text)) {
     it(`${sp.id} at ${field}: every sublevel energy, transition and line component's u is the export's to 2 %`, () => {
       const { exact, calc } = at(field, sp.id);
