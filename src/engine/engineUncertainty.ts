@@ -13,20 +13,22 @@
  * for every answer f (sublevel energy, sublevel transition frequency, line
  * component shift and absolute frequency). This is the first-order
  * propagation of GUM (JCGM 100:2008) §5.1.2 with the sensitivity
- * coefficients evaluated numerically, as its §5.1.3 (and Note 2 of §5.1.3)
- * allows: a central difference with step h_i = t_i·u_i gives ∂f/∂x_i to
- * within O(h_i²) of the curvature of f. Correlations are kept: one perturbed
+ * coefficients evaluated numerically, as §5.1.3 allows (its Note 2, from
+ * memory: the change of y for x_i moved by ±u(x_i)): a central difference
+ * with step h_i = t_i·u_i gives ∂f/∂x_i to within O(h_i²) of the curvature
+ * of f, i.e. first-order propagation to within O(u²). Correlations are kept: one perturbed
  * solve serves every answer, so a transition's c_i is the difference of its
  * two energies from the same solve, and a component's the difference of its
- * two levels' states.
+ * two levels' states. A component's absolute frequency ν0 + shift takes
+ * the centre's part straight from the data (ν0 is linear in its one input).
  *
  * The step. float64 resolves an energy of E hertz to about 1e-15·E (the
  * engine agrees with the 60-digit build to that), so a step of only u_i
  * would drown a small contribution (87Rb A(5²S1/2) has u = 45 µHz beside
  * energies of GHz). The step is therefore enlarged: t_i = max(1, min over the
- * moved inputs v of STEP·|v| / |contribution to v|), i.e. each moved input
- * moves by at least u_i and by about STEP = 1e-4 of its value when u_i is
- * smaller (level energies, absolute, by 1e-6), inside the linear range (the
+ * moved inputs v of STEP·|v| / |contribution to v|), i.e. the inputs move
+ * by at least u_i, and the most-moved by STEP = 1e-4 of its value when u_i
+ * is smaller (level energies, absolute, by 1e-6), inside the linear range (the
  * central difference's curvature error is ~STEP² relative) and far above
  * float noise. The answer's float noise bound is RESOLVED·√Σ(NOISE·S/t_i)²
  * (S the largest magnitude among the states involved, NOISE = 2e-15); when
