@@ -162,31 +162,38 @@ describe("insensitivePointSensitivity (implicit-function theorem)", () => {
   });
 });
 
-describe("termStateSensitivity (Hellmann–Feynman on the term solver)", () => {
-  const CM = new Dec("29979245800"); // Hz per cm⁻¹ (c exact, SI)
-  const gL = dec("0.99999368"); // 1 − m_e/M(87Rb), rounded (only compares two routes)
-  const gS = dec("2.00231930436092"); // CODATA 2022 −g_e
-  // 87Rb 5p ²P: Steck (A, B, gJ of P3/2; D1/D2 wave numbers); P1/2 gJ the LS value
-  const problem = (): TermProblem => ({
-    S2: 1, L: 1, I2: 3, gL, gS, gI: dec("-0.0009951414"), muB_h,
-    levels: [
-      { J2: 1, energy: dec("12578.951").mul(CM), gJ: landeLS(1, 1, 1, gL, gS)!, A: dec("408.328e6"), B: ZERO },
-      { J2: 3, energy: dec("12816.549").mul(CM), gJ: dec("1.3362"), A: dec("84.7185e6"), B: dec("12.4965e6") },
-    ],
+/** The 87Rb 5p ²P term of both term tests. */
+const CM = new Dec("29979245800"); // Hz per cm⁻¹ (c exact, SI)
+const gL = dec("0.99999368"); // 1 − m_e/M(87Rb), rounded (only compares two routes)
+const gS = dec("2.00231930436092"); // CODATA 2022 −g_e
+// 87Rb 5p ²P: Steck (A, B, gJ of P3/2; D1/D2 wave numbers); P1/2 gJ the LS value
+const problem = (): TermProblem => ({
+  S2: 1, L: 1, I2: 3, gL, gS, gI: dec("-0.0009951414"), muB_h,
+  levels: [
+    { J2: 1, energy: dec("12578.951").mul(CM), gJ: landeLS(1, 1, 1, gL, gS)!, A: dec("408.328e6"), B: ZERO },
+    { J2: 3, energy: dec("12816.549").mul(CM), gJ: dec("1.3362"), A: dec("84.7185e6"), B: dec("12.4965e6") },
+  ],
+});
+
+/** One input of a term problem: its value, the problem with it replaced, and its slope in a TermSensitivity. */
+type Knob = { name: string; x: Dec; set: (x: Dec) => TermProblem; pick: (t: TermSensitivity) => Dec };
+
+/** Every input of the two-level ²P term: energy, A, gJ of each level, B of P3/2 (P1/2 has none), gI, gS, gL, μB/h. */
+function termKnobs(base: TermProblem): Knob[] {
+  const perLevel = (k: "energy" | "A" | "B" | "gJ", li: number): Knob => ({
+    name: `${k}[${li}]`, x: base.levels[li]![k],
+    set: (x) => ({ ...base, levels: base.levels.map((l, i) => (i === li ? { ...l, [k]: x } : l)) }),
+    pick: (t) => t[k][li]!,
   });
+  const global = (k: "gI" | "gS" | "gL" | "muB_h"): Knob => ({ name: k, x: base[k], set: (x) => ({ ...base, [k]: x }), pick: (t) => t[k] });
+  return [...[0, 1].flatMap((li) => (["energy", "A", "gJ"] as const).map((k) => perLevel(k, li))), perLevel("B", 1), global("gI"), global("gS"), global("gL"), global("muB_h")];
+}
+
+describe("termStateSensitivity (Hellmann–Feynman on the term solver)", () => {
 
   it("equals central differences of the term solver's energies for every level energy, A, B, gJ, gI, gS, gL and μB/h (87Rb 5p ²P at 0.05 T and 3 T)", () => {
     const base = problem();
-    type Getter = { name: string; get: (p: TermProblem) => Dec; set: (p: TermProblem, x: Dec) => TermProblem; pick: (s: ReturnType<typeof termStateSensitivity>) => Dec };
-    const perLevel = (k: "energy" | "A" | "B" | "gJ", li: number): Getter => ({
-      name: `${k}[${li}]`,
-      get: (p) => p.levels[li]![k],
-      set: (p, x) => ({ ...p, levels: p.levels.map((l, i) => (i === li ? { ...l, [k]: x } : l)) }),
-      pick: (s) => s[k][li]!,
-    });
-    const global = (k: "gI" | "gS" | "gL" | "muB_h"): Getter => ({ name: k, get: (p) => p[k], set: (p, x) => ({ ...p, [k]: x }), pick: (s) => s[k] });
-    const getters: Getter[] = [0, 1].flatMap((li) => (["energy", "A", "gJ"] as const).map((k) => perLevel(k, li)));
-    getters.push(perLevel("B", 1), global("gI"), global("gS"), global("gL"), global("muB_h"));
+    const knobs = termKnobs(base);
     for (const t of ["0.05", "3"]) {
       const tesla = dec(t);
       const prepared = prepareTerm(base);
@@ -196,12 +203,11 @@ describe("termStateSensitivity (Hellmann–Feynman on the term solver)", () => {
         const picks = [0, Math.floor(states[li]!.length / 2), states[li]!.length - 1];
         for (const si of picks) {
           const hf = termStateSensitivity(prepared, states[li]![si]!, tesla);
-          for (const g of getters) {
-            const x = g.get(base);
-            const h = x.abs().mul(REL);
+          for (const k of knobs) {
+            const h = k.x.abs().mul(REL);
             const e = (p: TermProblem) => termHyperfineZeemanSolver(p)(tesla)[li]![si]!.energy;
-            const fd = e(g.set(base, x.plus(h))).minus(e(g.set(base, x.minus(h)))).div(h.mul(2));
-            expect(close(g.pick(hf), fd, "1e-12", new Dec("1e-6")), `${g.name} level ${li} state ${si} at ${t} T: ${g.pick(hf)} vs ${fd}`).toBe(true);
+            const fd = e(k.set(k.x.plus(h))).minus(e(k.set(k.x.minus(h)))).div(h.mul(2));
+            expect(close(k.pick(hf), fd, "1e-12", new Dec("1e-6")), `${k.name} level ${li} state ${si} at ${t} T: ${k.pick(hf)} vs ${fd}`).toBe(true);
           }
         }
       }
@@ -210,17 +216,6 @@ describe("termStateSensitivity (Hellmann–Feynman on the term solver)", () => {
 });
 
 describe("termInsensitivePointSensitivity (implicit-function theorem on the term solver)", () => {
-  const CM = new Dec("29979245800"); // Hz per cm⁻¹ (c exact, SI)
-  const gL = dec("0.99999368"); // 1 − m_e/M(87Rb), rounded (only compares two routes)
-  const gS = dec("2.00231930436092"); // CODATA 2022 −g_e
-  // 87Rb 5p ²P: Steck (A, B, gJ of P3/2; D1/D2 wave numbers); P1/2 gJ the LS value
-  const problem = (): TermProblem => ({
-    S2: 1, L: 1, I2: 3, gL, gS, gI: dec("-0.0009951414"), muB_h,
-    levels: [
-      { J2: 1, energy: dec("12578.951").mul(CM), gJ: landeLS(1, 1, 1, gL, gS)!, A: dec("408.328e6"), B: ZERO },
-      { J2: 3, energy: dec("12816.549").mul(CM), gJ: dec("1.3362"), A: dec("84.7185e6"), B: dec("12.4965e6") },
-    ],
-  });
   const up = { F2: 4, mF2: 2 };
   const lo = { F2: 2, mF2: -2 };
   // the field-insensitive point of 5²P1/2 |1,−1⟩ ↔ |2,1⟩ located afresh by the term solver's own search for a problem p
@@ -240,15 +235,7 @@ describe("termInsensitivePointSensitivity (implicit-function theorem on the term
     expect(at.tesla.toNumber()).toBeGreaterThan(3e-4);
     expect(at.tesla.toNumber()).toBeLessThan(4e-4);
     const s = termInsensitivePointSensitivity(prepareTerm(base), 0, up, lo, at.tesla);
-    type Knob = { name: string; x: Dec; set: (x: Dec) => TermProblem; pick: (t: TermSensitivity) => Dec };
-    const perLevel = (k: "energy" | "A" | "B" | "gJ", li: number): Knob => ({
-      name: `${k}[${li}]`, x: base.levels[li]![k],
-      set: (x) => ({ ...base, levels: base.levels.map((l, i) => (i === li ? { ...l, [k]: x } : l)) }),
-      pick: (t) => t[k][li]!,
-    });
-    const global = (k: "gI" | "gS" | "gL" | "muB_h"): Knob => ({ name: k, x: base[k], set: (x) => ({ ...base, [k]: x }), pick: (t) => t[k] });
-    const knobs = [...[0, 1].flatMap((li) => (["energy", "A", "gJ"] as const).map((k) => perLevel(k, li))), perLevel("B", 1), global("gI"), global("gS"), global("gL"), global("muB_h")];
-    for (const k of knobs) {
+    for (const k of termKnobs(base)) {
       // relative step 1e-8, as for the single-J point: the located point is good to ~1e-25
       const h = k.x.abs().mul("1e-8");
       const a = point(k.set(k.x.plus(h)));
